@@ -107,7 +107,12 @@ public final class WindStress {
                 new ScalarField(grid, tauY, NORTHWARD_NAME, UNITS, "surface downward northward stress (along the wind)"));
     }
 
-    static void requireWindUnits(VectorField wind) {
+    /**
+     * Checks that a wind field is in m s⁻¹ (accepted spellings: m s-1, m/s, m s^-1, m.s-1, m s**-1, m sec-1).
+     *
+     * @throws IllegalArgumentException naming the field and the unit found
+     */
+    public static void requireWindUnits(VectorField wind) {
         String units = wind.units().trim().toLowerCase(Locale.ROOT);
         if (!WIND_UNITS.contains(units)) {
             throw new IllegalArgumentException("wind field '" + wind.eastward().name() + "': expected units m s-1, got '"
