@@ -83,8 +83,8 @@ public final class AirDensity {
         if (!(temperatureK >= 150 && temperatureK <= 400)) {
             throw new IllegalArgumentException("air temperature must be in kelvin (150-400 K), got " + temperatureK);
         }
-        if (!(pressurePa >= 1e3 && pressurePa <= 2e5)) {
-            throw new IllegalArgumentException("air pressure must be in pascal (1e3-2e5 Pa), got " + pressurePa);
+        if (!(pressurePa >= 1e4 && pressurePa <= 2e5)) {
+            throw new IllegalArgumentException("air pressure must be in pascal (1e4-2e5 Pa), got " + pressurePa);
         }
     }
 }
