@@ -184,9 +184,9 @@ public final class ScenarioFiles {
             String parent = dotted(u.getPath().subList(0, u.getPath().size() - 1));
             List<String> known = u.getKnownPropertyIds() == null ? List.of()
                     : u.getKnownPropertyIds().stream().map(Object::toString).sorted().toList();
-            String where = parent.isEmpty() ? "at the top level" : "in '" + parent + "'";
+            String place = parent.isEmpty() ? "at the top level" : "in '" + parent + "'";
             return new ScenarioProblem(file, line, col, dotted(u.getPath()),
-                    "unknown key '" + u.getPropertyName() + "' " + where + "; allowed keys: " + String.join(", ", known));
+                    "unknown key '" + u.getPropertyName() + "' " + place + "; allowed keys: " + String.join(", ", known));
         }
         if (e instanceof InvalidFormatException f) {
             Class<?> target = f.getTargetType();
