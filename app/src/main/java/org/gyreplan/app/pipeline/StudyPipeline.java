@@ -67,6 +67,7 @@ public final class StudyPipeline {
             st.cancel.check();
             // Later stages (winds → stress → Ekman, gyre, coast, planning) are added here as the solver provides them.
             outputs(st, started);
+            st.cancel.check();
             out.commit();
             st.progress.progress("outputs", 1.0, "wrote " + out.files().size() + " files to " + out.target());
             return st.result(out.target(), out.files(), provenance(st, started));
