@@ -385,6 +385,7 @@ public final class StudyPipeline {
         double[] r = psi.range();
         st.headlines.put(Headline.MAX_STREAMFUNCTION, r[1]);
         st.headlines.put(Headline.MIN_STREAMFUNCTION, r[0]);
+        if (sol.sverdrup() != null) st.headlines.put(Headline.MAX_SVERDRUP, sol.sverdrup().range()[1]);
         if (sol.diagnostics() != null && Double.isFinite(sol.diagnostics().peakTransportSv())) {
             st.headlines.put(Headline.WESTERN_BOUNDARY_TRANSPORT, sol.diagnostics().peakTransportSv());
         }

@@ -308,7 +308,11 @@ public final class MapRenderer {
                     gr.setStroke(new BasicStroke(1f));
                     gr.draw(s);
                     if (o.labels() != null && k < o.labels().size() && o.labels().get(k) != null) {
-                        haloText(gr, o.labels().get(k), (float) x + 8, (float) y + 4);
+                        String lab = o.labels().get(k);
+                        int w = gr.getFontMetrics().stringWidth(lab);
+                        java.awt.Rectangle clip = gr.getClipBounds();
+                        boolean left = clip != null && x + 8 + w > clip.getMaxX() - 2;
+                        haloText(gr, lab, (float) (left ? x - 8 - w : x + 8), (float) y + 4);
                     }
                 }
             }
