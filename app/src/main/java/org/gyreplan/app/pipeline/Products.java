@@ -404,7 +404,8 @@ final class Products {
                 String name = c.point() == null ? "mean of all points" : c.point().name();
                 String pos = c.point() == null ? "" : String.format(Locale.ROOT, "%.2f°, %.2f°", c.point().latDeg(), c.point().lonDeg());
                 String bearing = c.point() == null ? "" : String.format(Locale.ROOT, "%.0f°", c.point().offshoreBearingDeg());
-                String peak = c.climatology() == null ? "–" : java.time.Month.of(c.climatology().maxMonth()).getDisplayName(java.time.format.TextStyle.SHORT, Locale.ENGLISH);
+                int pm = c.climatology() == null ? 0 : c.climatology().maxMonth();
+                String peak = pm < 1 || pm > 12 ? "–" : java.time.Month.of(pm).getDisplayName(java.time.format.TextStyle.SHORT, Locale.ENGLISH);
                 List<UpwellingSeason.Season> ss = c.seasons().isEmpty() ? List.of() : c.seasons();
                 int rows = Math.max(1, ss.size());
                 for (int k = 0; k < rows; k++) {
