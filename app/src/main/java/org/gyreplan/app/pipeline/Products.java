@@ -263,7 +263,8 @@ final class Products {
         ChartRenderer.ChartSpec c2 = new ChartRenderer.ChartSpec("Cumulative upwelling index from 1 January, " + where,
                 "(m³ s⁻¹ per 100 m) · day", dates)
                 .line(new ChartRenderer.Line("cumulative index", cum, new Color(0x1F, 0x4E, 0x79), 2f))
-                .note("Spring transition = minimum of the cumulative index; end of season = maximum (Bograd et al. 2009).");
+                .note("Spring transition = minimum of the cumulative index; end of season = maximum (Bograd et al. 2009).")
+                .breakYearly();
         for (UpwellingSeason.Season se : cm.seasons()) {
             if (!se.isResolved()) continue;
             LocalDate a = se.springTransitionDate(), b = se.endDate();
