@@ -161,6 +161,7 @@ public final class GeoTiffReader {
         long[] offsets = num.get(tiled ? 324 : 273), counts = num.get(tiled ? 325 : 279);
         if (offsets == null || counts == null) throw bad(f, "missing strip/tile offsets");
         int bps = bits / 8;
+        boolean float32 = sampleFormat == 3 && bits == 32; // GDAL_NODATA is decimal text: compare in float
         int across = (width + blockW - 1) / blockW;
         for (int blk = 0; blk < offsets.length; blk++) {
             int bx = (blk % across) * blockW, by = (blk / across) * blockH;
@@ -177,7 +178,8 @@ public final class GeoTiffReader {
                     int p = (r * blockW + c) * bps;
                     if (p + bps > raw.length) throw bad(f, "image block " + blk + " is shorter than expected");
                     double v = sample(bb, p, bits, sampleFormat, f);
-                    out[(by + r) * width + bx + c] = (v == nodata || Double.isNaN(v)) ? Double.NaN : v;
+                    boolean isNoData = v == nodata || (float32 && (float) v == (float) nodata);
+                    out[(by + r) * width + bx + c] = (isNoData || Double.isNaN(v)) ? Double.NaN : v;
                 }
             }
         }
