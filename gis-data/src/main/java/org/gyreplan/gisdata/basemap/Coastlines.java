@@ -26,7 +26,9 @@ import java.util.List;
  *       reversed so the sea is on the left, without the artificial edges made by clipping to the box, by the split
  *       of land at the antimeridian (x = ±180°) or along the south pole line of Antarctica.</li>
  * </ul>
- * Coordinates are longitude/latitude degrees as given.
+ * Coordinates are longitude/latitude degrees as given; for {@code ofBasin} with land, pass land in the basin's
+ * longitudes (e.g. {@link LandPolygons#clip} over the basin's box). The lines feed the solver's
+ * {@code coast.Coastline.ofLand(line, OceanSide.LEFT, constants)}.
  */
 public final class Coastlines {
     private Coastlines() {}
