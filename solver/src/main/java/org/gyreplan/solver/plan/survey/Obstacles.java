@@ -28,9 +28,10 @@ import java.util.Map;
  *       Between check points the true geodesic deviates from the chord by far less than a kilometre for steps of a
  *       few km, so features much smaller than the step can be missed.</li>
  *   <li>When a leg is blocked, it is replaced by the shortest path in a visibility graph whose nodes are the two
- *       ends and the vertices of the obstacles buffered by {@code marginKm} (buffer in degrees of latitude,
- *       i.e. the clearance east–west grows as 1/cos φ, which errs on the safe side; buffered rings simplified with a
- *       tolerance of a quarter margin, so every node stays outside the original polygons). Edges are geodesics that
+ *       ends and the vertices of the obstacles buffered by {@code marginKm} (a buffer in degrees, widened by
+ *       1/cos φ_max of the poleward-most obstacle latitude so that the east–west clearance is at least the margin;
+ *       north–south it is then larger, which errs on the safe side; buffered rings simplified with a tolerance of a
+ *       quarter of the buffer, and vertices inside any original polygon dropped). Edges are geodesics that
  *       pass the same crossing test against the original polygons; weights are their WGS 84 lengths. The search is
  *       Dijkstra on the dense graph; vertex–vertex visibility is computed once per
  *       {@code Obstacles} and point–vertex visibility once per point, so routing many stops costs
@@ -58,7 +59,11 @@ public final class Obstacles {
         if (union == null) {
             nodes = new double[0][];
         } else {
-            double marginDeg = marginKm / 111.0;
+            // a buffer of r degrees is r·111 km north–south but only r·111·cos φ km east–west: widen it by the
+            // poleward-most latitude of the obstacles so the east–west clearance is at least the margin everywhere
+            double maxAbsLat = Math.min(80.0, Math.max(Math.abs(union.getEnvelopeInternal().getMinY()),
+                    Math.abs(union.getEnvelopeInternal().getMaxY())));
+            double marginDeg = marginKm / 111.0 / Math.cos(Math.toRadians(maxAbsLat));
             Geometry buf = union.buffer(marginDeg, 4);
             buf = DouglasPeuckerSimplifier.simplify(buf, marginDeg / 4);
             List<double[]> pts = new ArrayList<>();

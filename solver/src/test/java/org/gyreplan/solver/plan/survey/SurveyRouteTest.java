@@ -126,7 +126,18 @@ class SurveyRouteTest {
                 }
                 double straight = Geodesic.WGS84.Inverse(l.from().latDeg(), l.from().lonDeg(), l.to().latDeg(), l.to().lonDeg()).s12;
                 assertTrue(l.distanceM() >= straight - 1e-6);
-                if (l.detours()) { detours++; assertTrue(l.distanceM() > straight); }
+                if (l.detours()) {
+                    detours++;
+                    assertTrue(l.distanceM() > straight);
+                    // turning points keep roughly the 2 km margin: planar degree distance × 111 km × cos φ is a lower
+                    // bound of the true distance; allow the quarter-buffer simplification (≥ 0.75 × margin)
+                    for (int q = 1; q + 1 < w.size(); q++) {
+                        double[] p = w.get(q);
+                        double degDist = both.distance(GF.createPoint(new Coordinate(p[0], p[1])));
+                        assertTrue(degDist * 111.0 * Math.cos(Math.toRadians(Math.abs(p[1]) + 0.5)) >= 0.75 * 2.0,
+                                "turning point too close: " + degDist + "° at " + p[1]);
+                    }
+                }
             }
         }
         assertTrue(detours > 0, "the test layout never forced a detour");
