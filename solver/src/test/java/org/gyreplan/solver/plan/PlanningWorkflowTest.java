@@ -12,7 +12,7 @@ import org.gyreplan.solver.plan.mooring.SiteConstraints;
 import org.gyreplan.solver.plan.mooring.SiteDossier;
 import org.gyreplan.solver.plan.mooring.SiteWeights;
 import org.gyreplan.solver.plan.mooring.SitingResult;
-import org.gyreplan.solver.plan.survey.CoastPoint;
+import org.gyreplan.solver.plan.survey.ShorePoint;
 import org.gyreplan.solver.plan.survey.CruiseSchedule;
 import org.gyreplan.solver.plan.survey.DepthModel;
 import org.gyreplan.solver.plan.survey.Leg;
@@ -114,8 +114,8 @@ class PlanningWorkflowTest {
         assertTrue(d.cautions().stream().anyMatch(c -> c.contains("No wind data for January")));
 
         // transects through the zone and the route
-        List<CoastPoint> coast = new ArrayList<>();
-        for (int q = 0; q <= 40; q++) coast.add(new CoastPoint(-12.0, 22 + q * 0.15, 270));
+        List<ShorePoint> coast = new ArrayList<>();
+        for (int q = 0; q <= 40; q++) coast.add(new ShorePoint(-12.0, 22 + q * 0.15, 270));
         Geometry land = box(-12.0, 19, -8, 31);
         List<Transect> transects = Transects.design(coast, TransectDesign.simple(120, 3, 150, 30), z.polygon(), land,
                 (lon, lat) -> depthField.interpolate(lon, lat));

@@ -11,9 +11,9 @@ import static org.junit.jupiter.api.Assertions.*;
 
 class TransectsTest {
     /** Straight N–S coast along 0° from 30°N to 32°N, ocean to the west; bearings wiggle ±20° around 270°. */
-    static List<CoastPoint> coast() {
-        List<CoastPoint> c = new ArrayList<>();
-        for (int q = 0; q <= 40; q++) c.add(new CoastPoint(0, 30 + q * 0.05, 270 + (q % 2 == 0 ? 20 : -20)));
+    static List<ShorePoint> coast() {
+        List<ShorePoint> c = new ArrayList<>();
+        for (int q = 0; q <= 40; q++) c.add(new ShorePoint(0, 30 + q * 0.05, 270 + (q % 2 == 0 ? 20 : -20)));
         return c;
     }
 
@@ -76,5 +76,12 @@ class TransectsTest {
         List<Transect> mid = Transects.design(coast(), TransectDesign.simple(50, 3, 100, 20), null, null, DepthModel.UNKNOWN);
         assertEquals(3, mid.size());
         assertEquals(Geodesy.direct(0, 30, 0, 50_000)[1], mid.get(0).originLatDeg(), 0.01);
+    }
+
+    /** The adapter keeps position and offshore bearing of the coast package's points. */
+    @Test
+    void adapterFromCoastPackage() {
+        ShorePoint p = ShorePoint.of(org.gyreplan.solver.coast.CoastPoint.of("a", -12.5, 25.0, 265.0));
+        assertEquals(new ShorePoint(-12.5, 25.0, 265.0), p);
     }
 }
