@@ -99,7 +99,10 @@ class SurveyRouteTest {
         }
     }
 
-    /** No leg crosses the island or the exclusion box; legs that would have crossed detour and get longer. */
+    /**
+     * No leg crosses the island or the exclusion box; legs that would have crossed detour and get longer; the order
+     * is within 2 % of exhaustive enumeration over the detour distances.
+     */
     @Test
     void legsNeverCrossIslandOrExclusion() {
         Geometry island = poly(-1.0, 29.6, -0.4, 29.8, -0.3, 30.4, -0.8, 30.5, -1.2, 30.1);
@@ -117,6 +120,16 @@ class SurveyRouteTest {
                 stops.add(new Stop("S" + stops.size(), lon, lat, 2000, StopKind.CTD_STATION));
             }
             Route r = SurveyRoute.plan(port, stops, obs);
+            // with detour distances (not a metric of straight lines) the order is still checked against brute force
+            List<Stop> all = new ArrayList<>();
+            all.add(port);
+            all.addAll(stops);
+            double[][] dm = new double[all.size()][all.size()];
+            for (int i = 0; i < all.size(); i++) for (int j = 0; j < all.size(); j++) {
+                if (i != j) dm[i][j] = SurveyRoute.length(obs.path(all.get(i).lonDeg(), all.get(i).latDeg(), all.get(j).lonDeg(), all.get(j).latDeg()));
+            }
+            double opt = bruteForce(dm);
+            assertTrue(r.totalDistanceM() <= opt * 1.02 + 1e-6, "seed " + seed + ": " + r.totalDistanceM() + " vs optimum " + opt);
             for (Leg l : r.legs()) {
                 List<double[]> w = l.waypoints();
                 for (int q = 0; q + 1 < w.size(); q++) {
@@ -149,5 +162,44 @@ class SurveyRouteTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SurveyRoute.plan(Stop.port("P", 2, 30),
                 List.of(new Stop("S7", 0, 30, 100, StopKind.CTD_STATION)), Obstacles.of(List.of(island), 1, 1)));
         assertTrue(e.getMessage().contains("S7"));
+    }
+
+    /**
+     * 120 stations: finishes quickly and the tour is a local optimum of the moves the method claims — no 2-opt move
+     * (Lin 1965) and no single-stop move (Or-opt with a segment of 1) shortens it, checked here independently by
+     * scanning every move on the final tour.
+     */
+    @Test
+    void largeTourIsTwoOptAndOrOptLocallyOptimal() {
+        Random rnd = new Random(2024);
+        Stop port = Stop.port("P", 0, 30);
+        List<Stop> stops = new ArrayList<>();
+        for (int i = 0; i < 120; i++) stops.add(new Stop("S" + i, -4 + 4 * rnd.nextDouble(), 28 + 4 * rnd.nextDouble(), 500, StopKind.CTD_STATION));
+        long t0 = System.nanoTime();
+        Route r = SurveyRoute.plan(port, stops);
+        assertTrue((System.nanoTime() - t0) / 1e9 < 8, "too slow");
+        List<Stop> tour = new ArrayList<>();
+        tour.add(port);
+        tour.addAll(r.order());
+        int n = tour.size();
+        double[][] d = new double[n][n];
+        for (int i = 0; i < n; i++) for (int j = 0; j < n; j++) {
+            d[i][j] = Geodesic.WGS84.Inverse(tour.get(i).latDeg(), tour.get(i).lonDeg(), tour.get(j).latDeg(), tour.get(j).lonDeg()).s12;
+        }
+        double tol = 1e-6;
+        for (int i = 1; i < n - 1; i++) for (int j = i + 1; j < n; j++) {
+            double delta = d[i - 1][j] + d[i][(j + 1) % n] - d[i - 1][i] - d[j][(j + 1) % n];
+            assertTrue(delta >= -tol, "improving 2-opt move " + i + "," + j);
+        }
+        for (int i = 1; i < n; i++) {
+            int prev = i - 1, next = (i + 1) % n;
+            double gain = d[prev][i] + d[i][next] - d[prev][next];
+            for (int p = 0; p < n; p++) {
+                int q = (p + 1) % n;
+                if (p == i || q == i) continue;
+                assertTrue(d[p][i] + d[i][q] - d[p][q] - gain >= -tol, "improving move of stop " + i + " after " + p);
+            }
+        }
+        assertEquals(120 + 1, r.legs().size());
     }
 }
