@@ -37,6 +37,7 @@ import org.gyreplan.app.desktop.map.MapLayer;
 import org.gyreplan.app.desktop.map.MapPoint;
 import org.gyreplan.app.desktop.map.MapProjection;
 import org.gyreplan.app.desktop.map.PolygonLayer;
+import org.gyreplan.app.desktop.study.CruisePlan;
 import org.gyreplan.app.desktop.study.MapStudy;
 import org.gyreplan.app.desktop.study.StudyLayers;
 import org.gyreplan.app.desktop.ui.ChartPane;
@@ -45,6 +46,8 @@ import org.gyreplan.app.desktop.ui.LayerPanel;
 import org.gyreplan.app.desktop.ui.PlanPanel;
 import org.gyreplan.app.desktop.ui.TimeBar;
 import org.gyreplan.gisdata.io.AtomicWrite;
+import org.gyreplan.gisdata.vector.PolygonFeature;
+import org.gyreplan.gisdata.vector.PolygonFiles;
 import org.gyreplan.solver.progress.CancelToken;
 import org.gyreplan.solver.progress.CancelledException;
 import org.locationtech.jts.geom.Envelope;
@@ -186,7 +189,7 @@ public class MainWindow extends BorderPane {
         built.moorings().addMoveListener(p -> pointMoved("Mooring site", p));
         built.stations().addMoveListener(p -> pointMoved("Station", p));
         timeBar.setSteps(s.stepLabels);
-        plan.show(s.schedule);
+        showPlan();
         messages.getItems().setAll(s.warnings);
         rightTabs.getTabs().get(2).setText(s.warnings.isEmpty() ? "Messages" : "Messages (" + s.warnings.size() + ")");
         double[] ext = s.extent != null ? s.extent : extentOf(s);
@@ -275,24 +278,45 @@ public class MainWindow extends BorderPane {
     private void pointMoved(String what, MapPoint p) {
         status.setText(what + " " + p.label() + " moved to " + org.gyreplan.app.desktop.map.Format.lat(p.latDeg())
                 + ", " + org.gyreplan.app.desktop.map.Format.lon(p.lonDeg()));
-        if (study.replanner != null) {
+        if (study.cruise != null) {
             try {
-                study.schedule.clear();
-                study.schedule.addAll(study.replanner.apply(study));
-                plan.show(study.schedule);
+                study.cruise.move(p.id(), p.lonDeg(), p.latDeg());
+                showPlan();
             } catch (RuntimeException ex) {
                 error("Could not update the schedule", ex);
             }
         }
     }
 
+    private void showPlan() {
+        if (study.cruise == null) {
+            plan.show(List.of(), null);
+            return;
+        }
+        var sch = study.cruise.schedule();
+        plan.show(study.cruise.rows(), String.format(java.util.Locale.ROOT,
+                "Departs %s UTC — %s nmi, %s days in total (under way %s h, work and weather %s h)",
+                CruisePlan.utc(sch.departure()), org.gyreplan.app.desktop.map.Format.tick(sch.totalDistanceNmi()),
+                org.gyreplan.app.desktop.map.Format.tick(sch.totalDays()),
+                org.gyreplan.app.desktop.map.Format.tick(sch.totalTransitHours()),
+                org.gyreplan.app.desktop.map.Format.tick(sch.totalStationHours())));
+        map.redraw();
+    }
+
     /** Imports a polygon file (as basin or exclusion zone). */
     public void importPolygon(Path file, DrawTarget target) {
         try {
-            List<Geometry> gs = PolygonImport.read(file);
-            if (target == DrawTarget.BASIN) addPolygon(gs.get(0), target);
-            else for (Geometry g : gs) addPolygon(g, target);
-            status.setText("Imported " + gs.size() + " polygon(s) from " + file.getFileName());
+            List<PolygonFeature> fs = PolygonFiles.read(file);
+            if (target == DrawTarget.BASIN) {
+                if (fs.size() > 1) {
+                    error(file + " holds " + fs.size() + " polygons; a basin file must hold exactly one", null);
+                    return;
+                }
+                addPolygon(fs.get(0).polygon(), target);
+            } else {
+                for (PolygonFeature f : fs) addPolygon(f.polygon(), target);
+            }
+            status.setText("Imported " + fs.size() + " polygon(s) from " + file.getFileName());
         } catch (Exception ex) {
             error("Could not import " + file, ex);
         }
@@ -535,7 +559,8 @@ public class MainWindow extends BorderPane {
     private void choosePolygon(DrawTarget target) {
         FileChooser fc = new FileChooser();
         fc.setTitle(target == DrawTarget.BASIN ? "Import basin polygon" : "Import exclusion zones");
-        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Polygons", PolygonImport.PATTERNS));
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("Polygons (GeoJSON, WKT, Shapefile, GeoPackage)",
+                "*.geojson", "*.json", "*.wkt", "*.txt", "*.shp", "*.gpkg"));
         File f = fc.showOpenDialog(window());
         if (f != null) importPolygon(f.toPath(), target);
     }

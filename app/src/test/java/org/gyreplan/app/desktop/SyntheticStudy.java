@@ -3,7 +3,14 @@ package org.gyreplan.app.desktop;
 import org.gyreplan.app.desktop.map.MapPoint;
 import org.gyreplan.app.desktop.study.MapStudy;
 import org.gyreplan.app.desktop.study.PointSeries;
-import org.gyreplan.app.desktop.study.ScheduleRow;
+import org.gyreplan.app.desktop.study.CruisePlan;
+import org.gyreplan.solver.plan.survey.CruiseSchedule;
+import org.gyreplan.solver.plan.survey.Obstacles;
+import org.gyreplan.solver.plan.survey.Route;
+import org.gyreplan.solver.plan.survey.ScheduleParameters;
+import org.gyreplan.solver.plan.survey.Stop;
+import org.gyreplan.solver.plan.survey.StopKind;
+import org.gyreplan.solver.plan.survey.SurveyRoute;
 import org.gyreplan.solver.PhysicalConstants;
 import org.gyreplan.solver.grid.LonLatGrid;
 import org.gyreplan.solver.grid.ScalarField;
@@ -92,30 +99,29 @@ public final class SyntheticStudy {
             s.indexPoints.add(new MapStudy.IndexPoint("P" + (p + 1), "Index point " + (p + 1), -21, lats[p],
                     vals[6], "Upwelling index, July", "m3 s-1 per 100 m", ps));
         }
-        s.moorings.add(new MapPoint("M1", "M1", -24, 25, Double.NaN));
-        s.moorings.add(new MapPoint("M2", "M2", -25, 36, Double.NaN));
-        for (int k = 0; k < 5; k++) s.stations.add(new MapPoint("S" + (k + 1), "S" + (k + 1), -22 - 2 * k, 28, Double.NaN));
-        s.replanner = SyntheticStudy::plan;
-        s.schedule.addAll(plan(s));
+        List<Stop> stops = new ArrayList<>();
+        for (int k = 0; k < 5; k++) {
+            double lon = -22 - 2 * k;
+            stops.add(new Stop("S" + (k + 1), lon, 28, depthAt(lon), StopKind.CTD_STATION));
+        }
+        stops.add(new Stop("M2", -25, 36, depthAt(-25), StopKind.MOORING_DEPLOYMENT));
+        stops.add(new Stop("M1", -24, 25, depthAt(-24), StopKind.MOORING_DEPLOYMENT));
+        Stop port = Stop.port("Port Ardent", -20.2, 28.6);
+        Obstacles obstacles = Obstacles.of(s.exclusions, 2, 5);
+        Route route = SurveyRoute.inOrder(port, stops, obstacles);
+        CruiseSchedule schedule = CruiseSchedule.of(route, ScheduleParameters.commonPractice(),
+                Instant.parse("2001-06-01T06:00:00Z"));
+        s.cruise = new CruisePlan(route, schedule, obstacles, s.depth);
+        for (Stop st : stops) {
+            MapPoint mp = new MapPoint(st.id(), st.id(), st.lonDeg(), st.latDeg(), Double.NaN);
+            if (st.kind() == StopKind.CTD_STATION) s.stations.add(mp); else s.moorings.add(mp);
+        }
+        s.port = new MapPoint("port", port.id(), port.lonDeg(), port.latDeg(), Double.NaN);
         s.warnings.add("Synthetic test study: every field is an analytic pattern, not a result.");
         return s;
     }
 
-    /** A test schedule: great-circle legs (haversine, R = 6371 km) at 10 kn plus 3 h per station. */
-    public static List<ScheduleRow> plan(MapStudy s) {
-        List<ScheduleRow> rows = new ArrayList<>();
-        int step = 1;
-        for (int k = 0; k < s.stations.size(); k++) {
-            if (k > 0) {
-                MapPoint a = s.stations.get(k - 1), b = s.stations.get(k);
-                double km = haversineKm(a.latDeg(), a.lonDeg(), b.latDeg(), b.lonDeg());
-                rows.add(new ScheduleRow(step++, "Transit to " + b.label(), km, km / (10 * 1.852), ""));
-            }
-            rows.add(new ScheduleRow(step++, "Station " + s.stations.get(k).label(), 0, 3, ""));
-        }
-        return rows;
-    }
-
+    /** Great-circle distance on a sphere of radius 6371 km (haversine form; Sinnott 1984), km. */
     public static double haversineKm(double lat1, double lon1, double lat2, double lon2) {
         double p1 = Math.toRadians(lat1), p2 = Math.toRadians(lat2);
         double dp = p2 - p1, dl = Math.toRadians(lon2 - lon1);

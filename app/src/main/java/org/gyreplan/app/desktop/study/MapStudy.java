@@ -9,7 +9,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.Function;
 
 /**
  * Everything the desktop shows of one study: fields (time-varying or not), geometries, points, the plan and
@@ -41,9 +40,10 @@ public final class MapStudy {
     public final List<IndexPoint> indexPoints = new ArrayList<>();
     public final List<MapPoint> moorings = new ArrayList<>();
     public final List<MapPoint> stations = new ArrayList<>();
-    public final List<ScheduleRow> schedule = new ArrayList<>();
-    /** Recomputes the schedule after sites or stations moved; null if the plan cannot be recomputed here. */
-    public Function<MapStudy, List<ScheduleRow>> replanner;
+    /** Port of the cruise, or null. */
+    public MapPoint port;
+    /** The editable cruise (route and schedule) whose stop ids match the mooring and station points; or null. */
+    public CruisePlan cruise;
     public final List<String> warnings = new ArrayList<>();
     /** Files written by the run (name → path text), for the export menu. */
     public final Map<String, String> outputs = new LinkedHashMap<>();

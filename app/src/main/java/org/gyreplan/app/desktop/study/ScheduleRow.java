@@ -1,12 +1,14 @@
 package org.gyreplan.app.desktop.study;
 
 /**
- * One line of a cruise schedule as shown in the plan table.
+ * One line of the cruise table as shown in the plan panel: sail a leg, then work at its end.
  *
- * @param step        order, from 1
- * @param what        activity, e.g. "Transit" or "Station S3"
- * @param distanceKm  leg distance, km (0 for work on station)
- * @param hours       duration, h
- * @param arrival     arrival or end time, text (UTC)
+ * @param step          leg number, from 1
+ * @param leg           "from → to"
+ * @param distanceNmi   sailing distance, nautical miles
+ * @param transitHours  time under way, h
+ * @param stationHours  work at the end of the leg including expected weather downtime, h
+ * @param arrivalUtc    arrival time, text (UTC)
  */
-public record ScheduleRow(int step, String what, double distanceKm, double hours, String arrival) { }
+public record ScheduleRow(int step, String leg, double distanceNmi, double transitHours, double stationHours,
+                          String arrivalUtc) { }

@@ -9,6 +9,7 @@ import org.gyreplan.app.desktop.map.MapPoint;
 import org.gyreplan.app.desktop.map.PointLayer;
 import org.gyreplan.app.desktop.map.PolygonLayer;
 import org.gyreplan.app.desktop.map.ScalarFieldLayer;
+import org.gyreplan.app.desktop.map.TrackLayer;
 import org.gyreplan.app.desktop.map.VectorLayer;
 import org.locationtech.jts.geom.Geometry;
 
@@ -20,7 +21,7 @@ public final class StudyLayers {
     /** Layer titles (also used by tests and the layer panel). */
     public static final String LAND = "Land", DEPTH = "Bathymetry", PSI = "Streamfunction contours",
             ZONES = "Upwelling zones", BASIN = "Basin outline", EXCLUSIONS = "Exclusion zones",
-            ROUTE = "Survey stations and route", MOORINGS = "Mooring sites", INDEX = "Index points";
+            ROUTE = "Survey stations", TRACK = "Cruise track", PORT = "Port", MOORINGS = "Mooring sites", INDEX = "Index points";
 
     /** The built layers and handles to the editable ones. */
     public record Built(List<MapLayer> layers, PolygonLayer basin, PolygonLayer exclusions,
@@ -60,9 +61,14 @@ public final class StudyLayers {
                 Color.rgb(190, 30, 30), 1.4, new double[] {6, 3});
         for (Geometry g : s.exclusions) excl.add(g, null);
         out.add(excl);
+        out.add(new TrackLayer(TRACK, () -> s.cruise == null ? List.of() : s.cruise.tracks(), Color.rgb(200, 110, 10)));
         PointLayer stations = new PointLayer(ROUTE, s.stations, PointLayer.Marker.TRIANGLE, Color.rgb(235, 140, 20),
-                null, null, null, true, true, true);
+                null, null, null, s.cruise == null, true, true);
         out.add(stations);
+        if (s.port != null) {
+            out.add(new PointLayer(PORT, List.of(s.port), PointLayer.Marker.SQUARE, Color.rgb(60, 60, 60),
+                    null, null, null, false, false, true));
+        }
         PointLayer moorings = new PointLayer(MOORINGS, s.moorings, PointLayer.Marker.DIAMOND, Color.rgb(150, 40, 170),
                 null, null, null, false, true, true);
         out.add(moorings);

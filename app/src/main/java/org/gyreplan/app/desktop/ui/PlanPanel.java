@@ -20,18 +20,20 @@ public class PlanPanel extends VBox {
 
     /** Table row with text cells. */
     public static final class Row {
-        private final String step, what, distance, hours, arrival;
+        private final String step, leg, distance, transit, station, arrival;
         Row(ScheduleRow r) {
             step = String.valueOf(r.step());
-            what = r.what();
-            distance = r.distanceKm() > 0 ? Format.number(r.distanceKm()) : "";
-            hours = Format.number(r.hours());
-            arrival = r.arrival();
+            leg = r.leg();
+            distance = Format.tick(r.distanceNmi());
+            transit = Format.tick(r.transitHours());
+            station = r.stationHours() > 0 ? Format.tick(r.stationHours()) : "";
+            arrival = r.arrivalUtc();
         }
         public String getStep() { return step; }
-        public String getWhat() { return what; }
+        public String getLeg() { return leg; }
         public String getDistance() { return distance; }
-        public String getHours() { return hours; }
+        public String getTransit() { return transit; }
+        public String getStation() { return station; }
         public String getArrival() { return arrival; }
     }
 
@@ -46,11 +48,12 @@ public class PlanPanel extends VBox {
         caution.setWrapText(true);
         caution.getStyleClass().add("caution");
         table.setId("scheduleTable");
-        table.getColumns().add(col("#", "step", 34));
-        table.getColumns().add(col("Activity", "what", 130));
-        table.getColumns().add(col("km", "distance", 60));
-        table.getColumns().add(col("h", "hours", 55));
-        table.getColumns().add(col("Ends (UTC)", "arrival", 120));
+        table.getColumns().add(col("#", "step", 30));
+        table.getColumns().add(col("Leg", "leg", 110));
+        table.getColumns().add(col("nmi", "distance", 50));
+        table.getColumns().add(col("Under way h", "transit", 60));
+        table.getColumns().add(col("Work h", "station", 50));
+        table.getColumns().add(col("Arrives (UTC)", "arrival", 115));
         table.setPlaceholder(new Label("No cruise plan in this study"));
         VBox.setVgrow(table, Priority.ALWAYS);
         totals.setId("scheduleTotals");
@@ -68,11 +71,9 @@ public class PlanPanel extends VBox {
     public TableView<Row> table() { return table; }
     public String totalsText() { return totals.getText(); }
 
-    public void show(List<ScheduleRow> rows) {
+    /** Shows the rows and a one-line summary (e.g. totals and departure). */
+    public void show(List<ScheduleRow> rows, String summary) {
         table.getItems().setAll(rows.stream().map(Row::new).toList());
-        double km = rows.stream().mapToDouble(ScheduleRow::distanceKm).sum();
-        double h = rows.stream().mapToDouble(ScheduleRow::hours).sum();
-        totals.setText(rows.isEmpty() ? "" : "Total " + Format.number(km) + " km, " + Format.number(h) + " h ("
-                + Format.number(h / 24) + " days)");
+        totals.setText(summary == null ? "" : summary);
     }
 }
