@@ -6,7 +6,9 @@ import org.gyreplan.app.render.Contours;
 import org.gyreplan.app.render.MapRenderer;
 import org.gyreplan.app.report.ReportWriter;
 import org.gyreplan.app.scenario.Scenario;
+import org.gyreplan.gisdata.cf.CfNetcdfWriter;
 import org.gyreplan.gisdata.csv.CsvTable;
+import org.gyreplan.gisdata.raster.GeoTiffWriter;
 import org.gyreplan.gisdata.vector.Feature;
 import org.gyreplan.gisdata.vector.FeatureLayer;
 import org.gyreplan.gisdata.vector.GeoJsonFiles;
@@ -68,6 +70,8 @@ final class Products {
         if (s.wants(Scenario.Output.MAPS)) maps();
         if (s.wants(Scenario.Output.MAPS)) charts();
         if (s.wants(Scenario.Output.CSV)) csv();
+        if (s.wants(Scenario.Output.NETCDF)) netcdf();
+        if (s.wants(Scenario.Output.GEOTIFF)) geotiff();
         vectors();
         sections();
         if (s.wants(Scenario.Output.REPORT)) {
@@ -333,6 +337,101 @@ final class Products {
         double s = 0; int n = 0;
         for (double x : v) if (Double.isFinite(x)) { s += x; n++; }
         return n > 0 ? s / n : Double.NaN;
+    }
+
+    // ------------------------------------------------------------------------------------------- gridded files
+
+    private CfNetcdfWriter.GlobalInfo info(String what) {
+        java.util.Map<String, String> extra = new java.util.LinkedHashMap<>();
+        extra.put("comment", ReportWriter.CAUTION);
+        extra.put("gyreplan_sign_conventions", "stress and transports toward (eastward, northward); Ekman pumping positive upward;"
+                + " streamfunction in Sv with northward transport = d(psi)/dx; coastal index positive offshore");
+        extra.put("gyreplan_drag_law", st.dragLaw == null ? "" : st.dragLaw.name());
+        extra.put("gyreplan_rho0", Double.toString(st.constants.rho0()));
+        extra.put("gyreplan_rho_air", Double.toString(st.constants.rhoAir()));
+        extra.put("gyreplan_equatorial_cutoff_deg", Double.toString(st.cutoff.latitudeDeg()));
+        return new CfNetcdfWriter.GlobalInfo(title() + ": " + what, "Gyreplan " + Version.current(),
+                "computed by Gyreplan from " + s.winds.file + " (" + period() + ")", extra);
+    }
+
+    private static CfNetcdfWriter.FieldSpec spec(ScalarField f, String standardName) {
+        return new CfNetcdfWriter.FieldSpec(f.name(), f.units(), standardName, f.longName());
+    }
+
+    private void netcdf() throws IOException {
+        tick("netCDF fields");
+        List<CfNetcdfWriter.FieldSpec> specs = new ArrayList<>();
+        List<double[]> values = new ArrayList<>();
+        VectorField tau = st.vectors.get("stress");
+        if (tau != null) {
+            specs.add(spec(tau.eastward(), "surface_downward_eastward_stress"));
+            values.add(tau.eastward().values());
+            specs.add(spec(tau.northward(), "surface_downward_northward_stress"));
+            values.add(tau.northward().values());
+        }
+        VectorField ek = st.vectors.get("ekman_transport");
+        if (ek != null) {
+            specs.add(spec(ek.eastward(), null));
+            values.add(ek.eastward().values());
+            specs.add(spec(ek.northward(), null));
+            values.add(ek.northward().values());
+        }
+        for (String k : List.of("stress_curl", "ekman_pumping", "upwelling_persistence", "wind_speed")) {
+            ScalarField f = st.fields.get(k);
+            if (f == null) continue;
+            specs.add(spec(f, k.equals("wind_speed") ? "wind_speed" : null));
+            values.add(f.values());
+        }
+        ScalarField depth = (ScalarField) st.products.get(Planning.DEPTH);
+        if (depth != null) {
+            specs.add(spec(depth, "sea_floor_depth_below_sea_surface"));
+            values.add(depth.values());
+        }
+        if (!specs.isEmpty()) {
+            st.out.writeFile("fields/surface_means.nc", tmp -> CfNetcdfWriter.writeGridded(tmp, st.windGrid, List.of(), specs,
+                    info("time-mean wind stress, Ekman transport and pumping, upwelling persistence"), k -> values,
+                    org.gyreplan.solver.progress.ProgressListener.NONE, st.cancel));
+        }
+        ScalarField psi = st.fields.get("streamfunction");
+        if (psi != null && st.gyre != null) {
+            List<CfNetcdfWriter.FieldSpec> gs = new ArrayList<>(List.of(spec(psi, "ocean_barotropic_streamfunction")));
+            List<double[]> gv = new ArrayList<>(List.of(psi.values()));
+            if (st.gyre.sverdrup() != null && st.gyre.sverdrup() != psi) {
+                ScalarField sv = st.gyre.sverdrup();
+                gs.add(new CfNetcdfWriter.FieldSpec("sverdrup_streamfunction", sv.units(), null,
+                        "Sverdrup streamfunction of the interior balance, zero on the eastern coast; northward transport = d(psi)/dx"));
+                gv.add(sv.values());
+            }
+            st.out.writeFile("fields/streamfunction.nc", tmp -> CfNetcdfWriter.writeGridded(tmp, psi.grid(), List.of(), gs,
+                    info("depth-integrated streamfunction (" + s.gyre.model.name().toLowerCase(Locale.ROOT) + ")"), k -> gv,
+                    org.gyreplan.solver.progress.ProgressListener.NONE, st.cancel));
+        }
+        if (!st.coastSeries.isEmpty()) {
+            List<CfNetcdfWriter.Station> stations = new ArrayList<>();
+            TimeSeries first = st.coastSeries.get(0).daily();
+            List<Instant> times = new ArrayList<>();
+            for (int k = 0; k < first.size(); k++) times.add(first.time(k));
+            double[][] v = new double[st.coastSeries.size()][];
+            for (int p = 0; p < v.length; p++) {
+                StudyPipeline.CoastSeries c = st.coastSeries.get(p);
+                stations.add(new CfNetcdfWriter.Station(c.point().name(), c.point().lonDeg(), c.point().latDeg()));
+                double[] d = c.daily().values();
+                v[p] = d.length == times.size() ? d : java.util.Arrays.copyOf(d, times.size());
+            }
+            CfNetcdfWriter.FieldSpec f = new CfNetcdfWriter.FieldSpec("coastal_upwelling_index", "m3 s-1 (100 m)-1", null,
+                    "coastal upwelling index: cross-shore Ekman transport per 100 m of coastline, positive offshore (upwelling)");
+            st.out.writeFile("series/coastal_index.nc", tmp -> CfNetcdfWriter.writeStations(tmp, stations, times, List.of(f),
+                    List.<double[][]>of(v), info("daily coastal upwelling index at the index points")));
+        }
+    }
+
+    private void geotiff() throws IOException {
+        tick("GeoTIFF");
+        for (String k : List.of("ekman_pumping", "upwelling_persistence", "streamfunction")) {
+            ScalarField f = st.fields.get(k);
+            if (f == null) continue;
+            st.out.writeFile("fields/" + k + ".tif", tmp -> GeoTiffWriter.write(tmp, f));
+        }
     }
 
     // ------------------------------------------------------------------------------------------- vectors
