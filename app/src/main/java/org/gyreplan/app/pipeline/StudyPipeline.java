@@ -308,6 +308,45 @@ public final class StudyPipeline {
         }
     }
 
+    /**
+     * Removes one-cell spurs of the mask: ocean cells with neither an east nor a west ocean neighbour, or neither a
+     * north nor a south one, where a centred derivative (and so the stress curl) has no data. Repeats until stable.
+     */
+    static LonLatGrid trimSpurs(LonLatGrid g, int[] count) {
+        boolean[] ocean = g.oceanMask();
+        boolean changed = true;
+        while (changed) {
+            changed = false;
+            for (int j = 0; j < g.ny(); j++) {
+                for (int i = 0; i < g.nx(); i++) {
+                    int k = g.index(i, j);
+                    if (!ocean[k]) continue;
+                    boolean ew = (i > 0 && ocean[k - 1]) || (i < g.nx() - 1 && ocean[k + 1]);
+                    boolean ns = (j > 0 && ocean[k - g.nx()]) || (j < g.ny() - 1 && ocean[k + g.nx()]);
+                    if (!ew || !ns) { ocean[k] = false; count[0]++; changed = true; }
+                }
+            }
+        }
+        return count[0] == 0 ? g : g.withOcean(ocean);
+    }
+
+    /** Flat index of the wind cell with finite values nearest to a position (grid distance), or −1. */
+    static int nearestFinite(LonLatGrid g, double[] a, double[] b, double lonDeg, double latDeg) {
+        double x = g.columnOf(lonDeg), y = g.rowOf(latDeg);
+        double c = Math.cos(Math.toRadians(latDeg)) * g.dLonDeg() / g.dLatDeg();
+        int best = -1;
+        double bd = Double.POSITIVE_INFINITY;
+        for (int j = 0; j < g.ny(); j++) {
+            for (int i = 0; i < g.nx(); i++) {
+                int k = g.index(i, j);
+                if (!(Double.isFinite(a[k]) && Double.isFinite(b[k]))) continue;
+                double dd = Math.hypot((i - x) * c, j - y);
+                if (dd < bd) { bd = dd; best = k; }
+            }
+        }
+        return best;
+    }
+
     /** Flat index of the ocean cell nearest to a position (by grid distance), or −1 if the grid has none. */
     static int nearestOcean(LonLatGrid g, double lonDeg, double latDeg) {
         double x = g.columnOf(lonDeg), y = g.rowOf(latDeg);
@@ -371,16 +410,34 @@ public final class StudyPipeline {
         double d = s.gyre.spacingDeg != null ? s.gyre.spacingDeg : s.grid.spacingDeg;
         double[] b = st.studyBox;
         LonLatGrid g = st.basin.mask(LonLatGrid.covering(b[0], b[1], b[2], b[3], d, st.constants.earthRadius()));
+        int[] trimmed = new int[1];
+        g = trimSpurs(g, trimmed);
+        if (trimmed[0] > 0) {
+            st.warn(RunWarning.Kind.GEOMETRY, trimmed[0] + " gyre-grid ocean cells with no ocean neighbour to the east or west,"
+                    + " or to the north or south (corners of the coast polygon), were treated as land so that the stress curl is defined");
+        }
         st.grid = g;
         VectorField tauWind = st.vectors.get("stress");
         double[] tx = new double[g.size()], ty = new double[g.size()];
+        int filled = 0;
+        LonLatGrid wg = tauWind.grid();
+        double[] wx = tauWind.eastward().values(), wy = tauWind.northward().values();
         for (int j = 0; j < g.ny(); j++) {
             for (int i = 0; i < g.nx(); i++) {
                 int k = g.index(i, j);
                 boolean ocean = g.isOcean(k);
                 tx[k] = ocean ? tauWind.eastward().interpolate(g.lonDeg(i), g.latDeg(j)) : Double.NaN;
                 ty[k] = ocean ? tauWind.northward().interpolate(g.lonDeg(i), g.latDeg(j)) : Double.NaN;
+                if (ocean && !(Double.isFinite(tx[k]) && Double.isFinite(ty[k]))) {
+                    // the gyre grid reaches closer to the coast than the wind grid: take the nearest wind cell with data
+                    int n = nearestFinite(wg, wx, wy, g.lonDeg(i), g.latDeg(j));
+                    if (n >= 0) { tx[k] = wx[n]; ty[k] = wy[n]; filled++; }
+                }
             }
+        }
+        if (filled > 0) {
+            st.warn(RunWarning.Kind.RESOLUTION, filled + " gyre-grid cells next to the coast lie between wind-grid cell centres;"
+                    + " they take the mean stress of the nearest wind cell (" + wg.dLonDeg() + "° wind grid, " + d + "° gyre grid)");
         }
         VectorField tau = new VectorField(new ScalarField(g, tx, tauWind.eastward().name(), "Pa", tauWind.eastward().longName()),
                 new ScalarField(g, ty, tauWind.northward().name(), "Pa", tauWind.northward().longName()));
