@@ -214,7 +214,7 @@ public final class StudyPipeline {
             SurfaceAccumulator acc = new SurfaceAccumulator(g);
             UpwellingStatistics stats = UpwellingStatistics.on(g);
             CoastalUpwellingIndex index = CoastalUpwellingIndex.defaults().withConstants(st.constants)
-                    .withEquatorialCutoffDeg(st.cutoff.latitudeDeg());
+                    .withCutoff(st.cutoff);
             int np = st.coastPoints.size();
             double[][] ui = new double[np][nt];
             Instant[] times = new Instant[nt];
