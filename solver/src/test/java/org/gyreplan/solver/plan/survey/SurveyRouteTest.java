@@ -202,4 +202,24 @@ class SurveyRouteTest {
         }
         assertEquals(120 + 1, r.legs().size());
     }
+
+    /**
+     * Across the antimeridian: 179°E → 179°W on the equator is 2° of the equator, a·2π/180 = 222.639 km (WGS 84
+     * a = 6 378 137 m), not 358°; an island given in continuous longitudes (179.6…180.4) is avoided.
+     */
+    @Test
+    void acrossTheAntimeridian() {
+        Route r = SurveyRoute.inOrder(Stop.port("P", 179.0, 0.0), List.of(new Stop("S", -179.0, 0.0, 4000, StopKind.CTD_STATION)),
+                Obstacles.none());
+        assertEquals(6_378_137.0 * Math.toRadians(2), r.legs().get(0).distanceM(), 1e-3);
+        Geometry island = poly(179.6, -0.3, 180.4, -0.3, 180.4, 0.3, 179.6, 0.3);
+        Obstacles obs = Obstacles.of(List.of(island), 2, 1);
+        Route around = SurveyRoute.inOrder(Stop.port("P", 179.0, 0.0), List.of(new Stop("S", 181.0, 0.0, 4000, StopKind.CTD_STATION)), obs);
+        Leg l = around.legs().get(0);
+        assertTrue(l.detours());
+        for (int q = 0; q + 1 < l.waypoints().size(); q++) {
+            double[] a = l.waypoints().get(q), b = l.waypoints().get(q + 1);
+            assertFalse(island.intersects(Obstacles.line(Geodesy.densify(a[0], a[1], b[0], b[1], 250))));
+        }
+    }
 }
