@@ -157,6 +157,15 @@ class SurveyRouteTest {
     }
 
     @Test
+    void noStopsGivesAnEmptyRoute() {
+        Route r = SurveyRoute.plan(Stop.port("P", 0, 30), List.of());
+        assertTrue(r.legs().isEmpty());
+        assertEquals(0.0, r.totalDistanceM(), 0);
+        CruiseSchedule c = CruiseSchedule.of(r, ScheduleParameters.commonPractice(), java.time.Instant.parse("2025-01-01T00:00:00Z"));
+        assertEquals(0.0, c.totalDays(), 0);
+    }
+
+    @Test
     void stopOnLandIsRejectedWithItsName() {
         Geometry island = poly(-1, 29, 1, 29, 1, 31, -1, 31);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SurveyRoute.plan(Stop.port("P", 2, 30),
