@@ -1,6 +1,7 @@
 package org.gyreplan.solver.ekman;
 
 import org.gyreplan.solver.PhysicalConstants;
+import org.gyreplan.solver.stress.StressVector;
 
 /**
  * The steady Ekman spiral in an infinitely deep ocean with constant eddy viscosity, for any stress direction and
@@ -35,13 +36,19 @@ public final class EkmanSpiral {
     private final double a;
     private final double s;
     private final double f;
+    private final double rho0Az;
 
-    private EkmanSpiral(double cRe, double cIm, double a, double s, double f) {
+    private EkmanSpiral(double cRe, double cIm, double a, double s, double f, double rho0Az) {
         this.cRe = cRe;
         this.cIm = cIm;
         this.a = a;
         this.s = s;
         this.f = f;
+        this.rho0Az = rho0Az;
+    }
+
+    private static EkmanSpiral undefined() {
+        return new EkmanSpiral(Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
     }
 
     /** The spiral for stress (τₓ, τᵧ) in Pa, eddy viscosity {@code az} (m² s⁻¹) at {@code latDeg}; default 5° cut-off. */
@@ -53,14 +60,40 @@ public final class EkmanSpiral {
     public static EkmanSpiral of(double tauX, double tauY, double az, double latDeg, PhysicalConstants constants,
                                  EquatorialCutoff cutoff) {
         EkmanDepth.requireViscosity(az);
-        if (cutoff.applies(latDeg)) return new EkmanSpiral(Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+        if (cutoff.applies(latDeg)) return undefined();
         double f = constants.coriolis(latDeg);
         double s = Math.signum(f);
         double a = Math.sqrt(Math.abs(f) / (2 * az));
         double k = 1.0 / (2 * constants.rho0() * az * a);
         // C = T (1 − i s) k = ((τₓ + s τᵧ) + i (τᵧ − s τₓ)) k
-        return new EkmanSpiral((tauX + s * tauY) * k, (tauY - s * tauX) * k, a, s, f);
+        return new EkmanSpiral((tauX + s * tauY) * k, (tauY - s * tauX) * k, a, s, f, constants.rho0() * az);
     }
+
+    /**
+     * The spiral whose surface current is (u₀, v₀) in m s⁻¹, for eddy viscosity {@code az} (m² s⁻¹) at {@code latDeg}:
+     * the stress is recovered from C = (u₀ + i v₀) as T = 2 ρ₀ A_z a C / (1 − i s); undefined inside {@code cutoff}.
+     */
+    public static EkmanSpiral fromSurfaceCurrent(double u0, double v0, double az, double latDeg,
+                                                 PhysicalConstants constants, EquatorialCutoff cutoff) {
+        EkmanDepth.requireViscosity(az);
+        if (cutoff.applies(latDeg)) return undefined();
+        double f = constants.coriolis(latDeg);
+        double s = Math.signum(f);
+        double a = Math.sqrt(Math.abs(f) / (2 * az));
+        return new EkmanSpiral(u0, v0, a, s, f, constants.rho0() * az);
+    }
+
+    /** The surface stress (Pa) that drives this spiral: T = 2 ρ₀ A_z a C / (1 − i s) = ρ₀ A_z a C (1 + i s). */
+    public StressVector stress() {
+        double k = rho0Az * a;
+        return new StressVector(k * (cRe - s * cIm), k * (cIm + s * cRe));
+    }
+
+    /** Eastward surface current u(0), m s⁻¹. */
+    public double surfaceEastward() { return cRe; }
+
+    /** Northward surface current v(0), m s⁻¹. */
+    public double surfaceNorthward() { return cIm; }
 
     /** Whether the spiral is defined (outside the cut-off). */
     public boolean isDefined() { return !Double.isNaN(a); }

@@ -42,7 +42,7 @@ public final class WindStress {
     /**
      * A stress field with the number of ocean cells whose wind speed was outside the drag law's validity range.
      *
-     * @param stress             τ (Pa), named {@value #EASTWARD_NAME} / {@value #NORTHWARD_NAME}
+     * @param stress             τ (Pa), named surface_downward_eastward_stress / surface_downward_northward_stress
      * @param outOfRangeCells    ocean cells with a finite wind outside [validMin, validMax] of the law
      * @param dragLaw            the law used
      */

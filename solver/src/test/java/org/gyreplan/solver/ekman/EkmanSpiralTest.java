@@ -120,6 +120,23 @@ class EkmanSpiralTest {
     }
 
     @Test
+    void surfaceCurrentRoundTrip() {
+        // A spiral given by its surface current reproduces the profile and the driving stress of the stress form.
+        for (double lat : new double[] {-35, 50}) {
+            EkmanSpiral byStress = EkmanSpiral.of(0.06, -0.02, 0.04, lat, C);
+            EkmanSpiral byCurrent = EkmanSpiral.fromSurfaceCurrent(byStress.surfaceEastward(), byStress.surfaceNorthward(),
+                    0.04, lat, C, EquatorialCutoff.DEFAULT);
+            for (double z = 0; z > -100; z -= 7) {
+                assertEquals(byStress.eastwardAt(z), byCurrent.eastwardAt(z), 1e-15);
+                assertEquals(byStress.northwardAt(z), byCurrent.northwardAt(z), 1e-15);
+            }
+            assertEquals(0.06, byCurrent.stress().eastwardPa(), 1e-14);
+            assertEquals(-0.02, byCurrent.stress().northwardPa(), 1e-14);
+            assertEquals(-0.02, byStress.stress().northwardPa(), 1e-14);
+        }
+    }
+
+    @Test
     void cutoffAndBadInput() {
         EkmanSpiral eq = EkmanSpiral.of(0, 0.1, 0.05, 2, C);
         assertFalse(eq.isDefined());

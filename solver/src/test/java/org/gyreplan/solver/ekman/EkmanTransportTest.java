@@ -54,6 +54,16 @@ class EkmanTransportTest {
     }
 
     @Test
+    void sv03EkmanTransportAcross26N() {
+        // CHECKS.md SV-03 (D, assumed inputs): zonal-mean τₓ = −0.05 N/m² over 6000 km at 26.5°N → 4.50 Sv northward
+        // (rel 1e-3). Plausibility against the RAPID array's Ekman component 3.2 ± 3.4 Sv (2004–2014, CHECKS OBS-02):
+        // within one standard deviation.
+        double sv = EkmanTransport.of(-0.05, 0, 26.5, C).northward() * 6000e3 / 1e6;
+        assertEquals(4.50, sv, 4.50 * 1e-3);
+        assertTrue(Math.abs(sv - 3.2) <= 3.4);
+    }
+
+    @Test
     void northernHemisphereRightOfStressForEveryDirection() {
         for (double dir = 0; dir < 360; dir += 15) {
             double tx = 0.1 * Math.sin(Math.toRadians(dir)), ty = 0.1 * Math.cos(Math.toRadians(dir));
