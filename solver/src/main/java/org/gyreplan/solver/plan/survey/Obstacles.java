@@ -94,6 +94,29 @@ public final class Obstacles {
         return new Obstacles(u == null || u.isEmpty() ? null : u, marginKm, checkStepKm);
     }
 
+    /**
+     * Obstacles clipped to the region of the cruise: the envelope of the places widened by {@code padDeg} on every
+     * side. Use it with large land layers (e.g. a world coastline) to keep the visibility graph small. Routes cannot
+     * leave the padded box around a clipped polygon, so choose a pad wider than any detour (e.g. 2–5°).
+     */
+    public static Obstacles around(List<Geometry> polygons, List<Stop> places, double padDeg, double marginKm, double checkStepKm) {
+        if (places == null || places.isEmpty()) throw new IllegalArgumentException("obstacles around a cruise need at least one place");
+        if (!(padDeg > 0)) throw new IllegalArgumentException("padDeg must be > 0, got " + padDeg);
+        org.locationtech.jts.geom.Envelope env = new org.locationtech.jts.geom.Envelope();
+        for (Stop p : places) env.expandToInclude(p.lonDeg(), p.latDeg());
+        env.expandBy(padDeg);
+        Geometry box = GF.toGeometry(env);
+        List<Geometry> clipped = new ArrayList<>();
+        if (polygons != null) {
+            for (Geometry g : polygons) {
+                if (!g.getEnvelopeInternal().intersects(env)) continue;
+                Geometry c = g.intersection(box);
+                if (!c.isEmpty()) clipped.add(c);
+            }
+        }
+        return of(clipped, marginKm, checkStepKm);
+    }
+
     /** The union of the obstacles, or null. */
     public Geometry union() { return union; }
 

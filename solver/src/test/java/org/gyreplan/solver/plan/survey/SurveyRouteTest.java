@@ -156,6 +156,21 @@ class SurveyRouteTest {
         assertTrue(detours > 0, "the test layout never forced a detour");
     }
 
+    /** Clipping a large land layer to the cruise region keeps the routes legal and gives the same route as unclipped. */
+    @Test
+    void clippedObstaclesGiveTheSameRoute() {
+        Geometry island = poly(-1.0, 29.6, -0.4, 29.8, -0.3, 30.4, -0.8, 30.5, -1.2, 30.1);
+        Geometry farAway = poly(40, 10, 41, 10, 41, 11, 40, 11);
+        Stop port = Stop.port("P", 0.2, 30.0);
+        List<Stop> stops = List.of(new Stop("A", -1.6, 30.2, 100, StopKind.CTD_STATION), new Stop("B", -1.5, 29.5, 100, StopKind.CTD_STATION));
+        List<Stop> places = new ArrayList<>(stops);
+        places.add(port);
+        Obstacles clipped = Obstacles.around(List.of(island, farAway), places, 2.0, 2.0, 1.0);
+        Obstacles full = Obstacles.of(List.of(island, farAway), 2.0, 1.0);
+        assertTrue(clipped.vertexCount() < full.vertexCount());
+        assertEquals(SurveyRoute.plan(port, stops, full).totalDistanceM(), SurveyRoute.plan(port, stops, clipped).totalDistanceM(), 1e-6);
+    }
+
     @Test
     void noStopsGivesAnEmptyRoute() {
         Route r = SurveyRoute.plan(Stop.port("P", 0, 30), List.of());
