@@ -94,6 +94,10 @@ public final class SurveyRoute {
     private static void checkIds(Stop port, List<Stop> stops, Obstacles obstacles) {
         Set<String> ids = new HashSet<>();
         ids.add(port.id());
+        if (obstacles.contains(port.lonDeg(), port.latDeg())) {
+            throw new IllegalArgumentException("port '" + port.id() + "' at (" + port.lonDeg() + ", " + port.latDeg()
+                    + ") lies on land or inside an exclusion zone; give the harbour entrance just offshore");
+        }
         for (Stop s : stops) {
             if (!ids.add(s.id())) throw new IllegalArgumentException("duplicate stop id '" + s.id() + "'");
             if (obstacles.contains(s.lonDeg(), s.latDeg())) {
