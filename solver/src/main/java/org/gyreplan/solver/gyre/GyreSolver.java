@@ -90,7 +90,8 @@ public final class GyreSolver {
             StencilMatrix A = op.matrix();
             cancel.check();
             listener.progress(STAGE, 0.02, "building multigrid hierarchy");
-            Multigrid mg = new Multigrid(A, par, 1, 1, 1);
+            int[] cyc = cycleParameters(op.R);
+            Multigrid mg = new Multigrid(A, par, cyc[0], cyc[1], cyc[2]);
             int n = A.size();
             int nSolves = 1 + islands.size();
             int[] iters = new int[nSolves];
@@ -154,6 +155,17 @@ public final class GyreSolver {
         } finally {
             par.shutdown();
         }
+    }
+
+    static int[] cycleParameters(int radius) {
+        String prop = System.getProperty("gyre.mg" + radius);
+        if (prop != null) {
+            String[] t = prop.split(",");
+            return new int[] {Integer.parseInt(t[0]), Integer.parseInt(t[1]), Integer.parseInt(t[2])};
+        }
+        // drag only (5-point): V(1,1); with the biharmonic term: W(1,1), which keeps the iteration count from growing
+        // quickly under refinement (bilinear transfers are only just adequate for a fourth-order operator)
+        return radius == 1 ? new int[] {1, 1, 1} : new int[] {1, 1, 2};
     }
 
     /** curl τ/ρ₀ per cell (m s⁻²); checks main-basin cells, fills island cells from adjacent ocean if undefined. */
