@@ -1,6 +1,5 @@
 package org.gyreplan.solver.gyre;
 
-import org.gyreplan.solver.DegreeTrig;
 import org.gyreplan.solver.PhysicalConstants;
 import org.gyreplan.solver.grid.LonLatGrid;
 import org.gyreplan.solver.grid.ScalarField;
@@ -157,12 +156,8 @@ public final class GyreSolver {
         }
     }
 
+    /** {pre-sweeps, post-sweeps, cycle index} of the multigrid preconditioner for a stencil radius. */
     static int[] cycleParameters(int radius) {
-        String prop = System.getProperty("gyre.mg" + radius);
-        if (prop != null) {
-            String[] t = prop.split(",");
-            return new int[] {Integer.parseInt(t[0]), Integer.parseInt(t[1]), Integer.parseInt(t[2])};
-        }
         // drag only (5-point): V(1,1); with the biharmonic term: W(1,1), which keeps the iteration count from growing
         // quickly under refinement (bilinear transfers are only just adequate for a fourth-order operator)
         return radius == 1 ? new int[] {1, 1, 1} : new int[] {1, 1, 2};
