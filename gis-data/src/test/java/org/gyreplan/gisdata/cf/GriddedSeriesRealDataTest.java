@@ -139,6 +139,25 @@ class GriddedSeriesRealDataTest {
     }
 
     @Test
+    void netcdf4CopyGivesTheSameSeries(@TempDir Path tmp) throws IOException {
+        Path classic = RealData.file("coads_climatology.cdf");
+        Path nc4 = tmp.resolve("coads4.nc");
+        RealData.run("nccopy", "-k", "nc4", "-d", "5", "-s", classic.toString(), nc4.toString());
+        BoundingBox box = new BoundingBox(-30, 20, -50, 10);
+        List<VariableRole> roles = List.of(VariableRole.EASTWARD_WIND, VariableRole.NORTHWARD_WIND, VariableRole.SEA_LEVEL_PRESSURE);
+        try (GriddedSeries a = GriddedSeries.open(classic, roles, VariableMapping.automatic(), box, null, null);
+             GriddedSeries b = GriddedSeries.open(nc4, roles, VariableMapping.automatic(), box, null, null)) {
+            assertTrue(a.grid().sameGeometry(b.grid()));
+            assertEquals(a.timeAxis(), b.timeAxis());
+            for (int k : new int[] {0, 7, 11}) {
+                for (int r = 0; r < 3; r++) {
+                    assertArrayEquals(a.read(k).fields().get(r).values(), b.read(k).fields().get(r).values(), 0.0);
+                }
+            }
+        }
+    }
+
+    @Test
     void descendingLatitudeAndKnotsAreNormalised(@TempDir Path tmp) throws IOException {
         // a copy of one COADS month with latitude north→south, longitudes −179…179, wind in knots
         Path f = tmp.resolve("desc.nc");
