@@ -148,5 +148,14 @@ class CfNetcdfWriterTest {
             assertEquals(3.0, v[5], 0.0);
             assertEquals(38.25, nc.variable("lat").readAll()[0], 0.0);
         }
+        // the same file as netCDF-4 (nccopy): character arrays and fixed dimensions through the HDF5 reader
+        Path nc4 = tmp.resolve("stations4.nc");
+        RealData.run("nccopy", "-k", "nc4", f.toString(), nc4.toString());
+        try (NetcdfDataset nc = NetcdfDataset.open(nc4)) {
+            assertArrayEquals(new String[] {"Cape Aurora", "Port Lumen"}, nc.variable("station_name").readStrings());
+            assertEquals(List.of("station", "time"), nc.variable("cui").dimensionNames());
+            assertEquals(120.5, nc.variable("cui").readAll()[0], 0.0);
+            assertEquals("timeSeries", nc.globalAttribute("featureType").text());
+        }
     }
 }
