@@ -207,6 +207,46 @@ class GriddedSeriesRealDataTest {
     }
 
     @Test
+    void regionalGridInZeroTo360WithLongitudeFirstAndABoxInMinus180To180(@TempDir Path tmp) throws IOException {
+        // invented regional file: lon 150.5 … 249.5 (0–360 convention), lat 10.5 … 39.5, dimension order (lon, lat),
+        // pressure in hPa = 1000 + lon/10 + lat/100 so every value tells its own position
+        Path f = tmp.resolve("regional.nc");
+        int nx = 100, ny = 30;
+        double[] lon = new double[nx], lat = new double[ny], p = new double[nx * ny];
+        for (int i = 0; i < nx; i++) lon[i] = 150.5 + i;
+        for (int j = 0; j < ny; j++) lat[j] = 10.5 + j;
+        for (int i = 0; i < nx; i++) for (int j = 0; j < ny; j++) p[i * ny + j] = 1000 + lon[i] / 10 + lat[j] / 100;
+        ClassicNetcdfWriter w = new ClassicNetcdfWriter();
+        w.dimension("x", nx).dimension("y", ny);
+        w.variable("x", DataType.DOUBLE, "x").text("units", "degrees_east");
+        w.variable("y", DataType.DOUBLE, "y").text("units", "degrees_north");
+        w.variable("msl", DataType.DOUBLE, "x", "y").text("units", "hPa");
+        AtomicWrite.toFile(f, q -> {
+            try (var out = w.open(q)) {
+                out.write("x", lon);
+                out.write("y", lat);
+                out.write("msl", p);
+            }
+        });
+        // box 170°W … 120°W = 190 … 240 in the file's convention
+        try (GriddedSeries s = GriddedSeries.open(f, List.of(VariableRole.SEA_LEVEL_PRESSURE), VariableMapping.automatic(),
+                new BoundingBox(-170, -120, 20, 30), null, null)) {
+            LonLatGrid g = s.grid();
+            assertEquals(-169.5, g.lon0Deg(), 1e-9);
+            assertEquals(50, g.nx());
+            assertEquals(20.5, g.lat0Deg(), 1e-9);
+            assertEquals(10, g.ny());
+            ScalarField got = s.read(0).fields().get(0);
+            for (int j = 0; j < g.ny(); j++) {
+                for (int i = 0; i < g.nx(); i++) {
+                    double expectedHpa = 1000 + (g.lonDeg(i) + 360) / 10 + g.latDeg(j) / 100;
+                    assertEquals(expectedHpa * 100, got.at(i, j), 1e-7, "Pa at " + g.lonDeg(i) + "," + g.latDeg(j));
+                }
+            }
+        }
+    }
+
+    @Test
     void missingVariableListsWhatTheFileHas() throws IOException {
         var e = assertThrows(NetcdfFormatException.class, () -> GriddedSeries.openStress(
                 RealData.file("coads_climatology.cdf"), VariableMapping.automatic(), null, null, null));
