@@ -102,6 +102,12 @@ class CfNetcdfWriterTest {
         assertTrue(info.contains("Origin = (170.000000000000000,-26.000000000000000)"), info);
         assertTrue(info.contains("Pixel Size = (2.000000000000000,-2.000000000000000)"), info);
         assertTrue(info.contains("NoData Value=9.96921e+36"), info);
+        // values per band (one band per time step) at the centre of cell (i=3, j=1) = (177°E, 31°S)
+        String[] v = RealData.run("gdallocationinfo", "-valonly", "-geoloc", "NETCDF:" + f + ":tau_x", "177", "-31")
+                .trim().split("\\s+");
+        assertEquals(2, v.length);
+        assertEquals(value(0, 0, 3, 1), Double.parseDouble(v[0]), 1e-6 * value(0, 0, 3, 1));
+        assertEquals(value(0, 1, 3, 1), Double.parseDouble(v[1]), 1e-6 * value(0, 1, 3, 1));
     }
 
     @Test
