@@ -51,6 +51,8 @@ class StationWindCsvTest {
         assertEquals(Instant.parse("2026-01-06T00:00:00Z"), s.time(4));
         assertEquals(0.0, s.eastwardMs(5), 0);
         assertEquals(0.0, s.northwardMs(5), 0);
+        assertEquals(-10 * KN, s.northwardSeries().value(0), TOL);
+        assertEquals(s.time(2), s.eastwardSeries().time(2));
     }
 
     @Test

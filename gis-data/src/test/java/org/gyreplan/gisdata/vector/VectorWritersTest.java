@@ -196,6 +196,11 @@ class VectorWritersTest {
         assertEquals(54.5, Double.parseDouble(((Element) wp.item(0)).getAttribute("lat")), 0);
         assertEquals(-169.5, Double.parseDouble(((Element) wp.item(1)).getAttribute("lon")), 0);
         assertEquals(2, d.getElementsByTagNameNS(ns, "rtept").getLength());
+
+        List<GpxFiles.Waypoint> fromLayer = GpxFiles.waypoints(Fixtures.stations());
+        assertEquals("M1", fromLayer.get(0).name());
+        assertEquals(-33.5, fromLayer.get(1).latDeg(), 0);
+        assertThrows(IllegalArgumentException.class, () -> GpxFiles.waypoints(Fixtures.zones()));
     }
 
     @Test
