@@ -162,6 +162,19 @@ class PolygonFilesTest {
         assertEquals(Problem.PROJECTED_CRS, e.problem());
         assertTrue(e.getMessage().contains("UTM"), e.getMessage());
         assertTrue(e.getMessage().contains("EPSG:4326"), e.getMessage());
+
+        // another geographic datum (ED50, whose WKT carries TOWGS84 shift parameters) is refused too
+        Path ed50 = dir.resolve("ed50.shp");
+        assertEquals(0, Ogr.run("ogr2ogr", "-f", "ESRI Shapefile", "-t_srs", "EPSG:4230", ed50.toString(), src.toString()).exit());
+        GeometryFileException other = assertThrows(GeometryFileException.class, () -> PolygonFiles.read(ed50));
+        assertEquals(Problem.UNSUPPORTED_CRS, other.problem());
+
+        // the unit checks themselves: WKT 2 of EPSG:4326 as GDAL prints it is accepted, WKT 1 with TOWGS84 refused
+        CrsCheck.requireGeographicWgs84("GEOGCRS[\"WGS 84\",ENSEMBLE[\"World Geodetic System 1984 ensemble\",MEMBER[\"World"
+                + " Geodetic System 1984 (Transit)\"]],CS[ellipsoidal,2],ID[\"EPSG\",4326]]", null);
+        assertThrows(GeometryFileException.class, () -> CrsCheck.requireGeographicWgs84("GEOGCS[\"ED50\",DATUM["
+                + "\"European_Datum_1950\",SPHEROID[\"International 1924\",6378388,297],TOWGS84[-87,-98,-121,0,0,0,0]],"
+                + "PRIMEM[\"Greenwich\",0],UNIT[\"degree\",0.0174532925199433]]", null));
     }
 
     @Test
