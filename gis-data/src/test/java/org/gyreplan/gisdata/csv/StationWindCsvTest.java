@@ -72,6 +72,17 @@ class StationWindCsvTest {
     }
 
     @Test
+    void dailySeriesFromASpreadsheetExportWithByteOrderMark() throws Exception {
+        Path f = write("daily.csv", "\uFEFFdate;wind_speed (knots);wind_direction (deg);station\r\n"
+                + "2026-02-01;20;270;\"Cape; North\"\r\n2026-02-02;20;360;\"Cape; North\"\r\n");
+        StationWindSeries s = StationWindCsv.read(f);
+        assertEquals(Instant.parse("2026-02-02T00:00:00Z"), s.time(1));
+        assertEquals(20 * KN, s.eastwardMs(0), TOL);   // west wind blows eastward
+        assertEquals(-20 * KN, s.northwardMs(1), TOL); // 360° = north wind
+        assertEquals(0.0, s.eastwardMs(1), TOL);
+    }
+
+    @Test
     void badRowNamesFileLineAndColumn() throws Exception {
         Path f = write("bad.csv", "# comment\ntime,speed [m/s],direction\n2026-01-01T00:00Z,5,10\n2026-01-01T01:00Z,5.5.1,10\n");
         CsvFormatException e = assertThrows(CsvFormatException.class, () -> StationWindCsv.read(f));
