@@ -124,6 +124,12 @@ class StationWindCsvTest {
         assertEquals(1.0, cm.eastwardMs(0), TOL);
         assertEquals(-0.5, cm.northwardMs(0), TOL);
 
+        CsvFormatException both = assertThrows(CsvFormatException.class, () -> StationWindCsv.read(write("both.csv",
+                "time,speed [m/s],direction,u [m/s],v [m/s]\n2026-01-01T00:00Z,5,10,1,2\n")));
+        assertEquals(Problem.AMBIGUOUS_COLUMNS, both.problem());
+        StationWindSeries chosen = StationWindCsv.read(both.file(), StationWindCsv.Options.DEFAULT.withComponents("u", "v"));
+        assertEquals(2.0, chosen.northwardMs(0), 0);
+
         CsvFormatException missing = assertThrows(CsvFormatException.class, () -> StationWindCsv.read(write("m.csv",
                 "time,pressure [hPa]\n2026-01-01T00:00Z,1013\n")));
         assertEquals(Problem.MISSING_COLUMN, missing.problem());

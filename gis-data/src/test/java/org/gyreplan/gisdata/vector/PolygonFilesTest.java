@@ -216,4 +216,23 @@ class PolygonFilesTest {
         assertEquals(Problem.NOT_POLYGON, points.problem());
         assertEquals(2, PolygonFiles.read(gpkg, PolygonFiles.Options.DEFAULT.withLayer("more_zones")).size());
     }
+
+    @Test
+    void legacyCrsMembersAndWktPrefixes() throws Exception {
+        String square = "\"coordinates\":[[[0,0],[1,0],[1,1],[0,1],[0,0]]]";
+        assertEquals(1.0, PolygonFiles.read(write("crs84.geojson", "{\"type\":\"Polygon\",\"crs\":{\"type\":\"name\","
+                + "\"properties\":{\"name\":\"urn:ogc:def:crs:OGC:1.3:CRS84\"}}," + square + "}")).get(0).polygon().getArea(), 0);
+        GeometryFileException utm = assertThrows(GeometryFileException.class, () -> PolygonFiles.read(write("crs.geojson",
+                "{\"type\":\"Polygon\",\"crs\":{\"type\":\"name\",\"properties\":{\"name\":\"urn:ogc:def:crs:EPSG::32631\"}},"
+                        + square + "}")));
+        assertEquals(Problem.UNSUPPORTED_CRS, utm.problem());
+        assertEquals(Problem.UNSUPPORTED_CRS, assertThrows(GeometryFileException.class,
+                () -> PolygonFiles.read(write("srid.wkt", "SRID=3857;POLYGON ((0 0, 1 0, 1 1, 0 0))"))).problem());
+        assertEquals(Problem.NOT_POLYGON, assertThrows(GeometryFileException.class,
+                () -> PolygonFiles.read(write("empty.wkt", "POLYGON EMPTY"))).problem());
+        GeometryFileException topo = assertThrows(GeometryFileException.class,
+                () -> PolygonFiles.read(write("topo.json", "{\"type\":\"Topology\",\"objects\":{},\"arcs\":[]}")));
+        assertEquals(Problem.UNSUPPORTED_FORMAT, topo.problem());
+        assertTrue(topo.getMessage().contains("TopoJSON"), topo.getMessage());
+    }
 }
