@@ -228,6 +228,12 @@ public final class PolygonMask {
      * </pre>
      */
     public static double[] distanceToBoundaryKm(LonLatGrid grid, Geometry polygon) {
+        return distanceToBoundaryKm(grid, polygon, ProgressListener.NONE, CancelToken.none());
+    }
+
+    /** As {@link #distanceToBoundaryKm(LonLatGrid, Geometry)}, reporting progress per row and honouring cancellation. */
+    public static double[] distanceToBoundaryKm(LonLatGrid grid, Geometry polygon, ProgressListener progress,
+                                                CancelToken cancel) {
         Geometry g = Antimeridian.intoRange(polygon, grid.westDeg(), grid.eastDeg());
         double midLat = 0.5 * (grid.southDeg() + grid.northDeg());
         double sx = DegreeTrig.cosDeg(midLat);
@@ -239,6 +245,8 @@ public final class PolygonMask {
         org.locationtech.jts.geom.GeometryFactory f = g.getFactory();
         double rKm = grid.radius() / 1000.0;
         for (int j = 0; j < grid.ny(); j++) {
+            cancel.check();
+            progress.progress("distance", (double) j / grid.ny(), "distance to the boundary");
             double lat = grid.latDeg(j);
             for (int i = 0; i < grid.nx(); i++) {
                 double lon = grid.lonDeg(i);
@@ -247,6 +255,7 @@ public final class PolygonMask {
                 out[grid.index(i, j)] = haversineKm(lon, lat, b.x / sx, b.y, rKm);
             }
         }
+        progress.progress("distance", 1.0, "distance to the boundary done");
         return out;
     }
 

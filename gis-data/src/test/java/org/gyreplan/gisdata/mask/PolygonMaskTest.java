@@ -131,6 +131,18 @@ class PolygonMaskTest {
     }
 
     @Test
+    void longLoopsReportProgressAndStopWhenCancelled() {
+        LonLatGrid grid = LonLatGrid.covering(0, 10, 0, 10, 0.1, R);
+        double[] last = {-1};
+        PolygonMask.rasterise(grid, rect(2, 2, 8, 8), (stage, f, m) -> last[0] = f, org.gyreplan.solver.progress.CancelToken.none());
+        assertEquals(1.0, last[0], 0);
+        org.gyreplan.solver.progress.CancelToken cancel = org.gyreplan.solver.progress.CancelToken.none();
+        cancel.cancel();
+        assertThrows(org.gyreplan.solver.progress.CancelledException.class,
+                () -> PolygonMask.distanceToBoundaryKm(grid, rect(2, 2, 8, 8), org.gyreplan.solver.progress.ProgressListener.NONE, cancel));
+    }
+
+    @Test
     void pointsAreRefused() {
         LonLatGrid grid = LonLatGrid.covering(0, 1, 0, 1, 0.5, R);
         assertThrows(IllegalArgumentException.class, () -> PolygonMask.rasterise(grid, GF.createPoint(new Coordinate(0.5, 0.5))));
