@@ -223,7 +223,7 @@ public final class Scenario {
         public Double maxDepth = 2000.0;
         public Double minSeparationKm = 30.0;
         public Double maxDistanceFromPortKm;
-        /** Relative weights of the ranking criteria, e.g. {upwelling: 0.5, persistence: 0.3, depth: 0.1, distance: 0.1}. */
+        /** Relative weights of the ranking criteria: persistence, intensity, variability, portProximity (≥ 0). */
         public Map<String, Double> weights;
     }
 
@@ -279,12 +279,18 @@ public final class Scenario {
             return ok;
         }
 
+        private static String g(double v) {
+            if (v == Math.rint(v) && Math.abs(v) < 1e9) return Long.toString((long) v);
+            String t = String.format(java.util.Locale.ROOT, "%.4g", v);
+            return t.contains("e") ? t : t.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+
         @Override
         public String toString() {
             List<String> parts = new ArrayList<>();
-            if (value != null) parts.add(value + " ± " + (tolerance == null ? 0.0 : tolerance));
-            if (min != null) parts.add("≥ " + min);
-            if (max != null) parts.add("≤ " + max);
+            if (value != null) parts.add(g(value) + " ± " + g(tolerance == null ? 0.0 : tolerance));
+            if (min != null) parts.add("≥ " + g(min));
+            if (max != null) parts.add("≤ " + g(max));
             return String.join(", ", parts);
         }
     }
