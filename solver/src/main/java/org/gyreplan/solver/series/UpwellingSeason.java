@@ -115,6 +115,17 @@ public final class UpwellingSeason {
             return Double.isNaN(springTransitionDay) ? null : startDate.plusDays(Math.max(1, (int) springTransitionDay) - 1);
         }
 
+        /**
+         * The cumulative index as a series stamped at the end of each day (daily) or month (coarse), i.e. at
+         * startDate + day, in the given unit (index unit × day); empty without data.
+         */
+        public TimeSeries cumulativeSeries(String name, String units) {
+            long t0 = startDate.atStartOfDay(java.time.ZoneOffset.UTC).toEpochSecond();
+            long[] t = new long[cumulative.length];
+            for (int k = 0; k < t.length; k++) t[k] = t0 + Math.round(cumulativeDays[k] * 86400.0);
+            return new TimeSeries(name, units, t, cumulative);
+        }
+
         /** The end of the season as a date (null unless resolved). */
         public LocalDate endDate() {
             return Double.isNaN(endDay) ? null : startDate.plusDays(Math.max(1, (int) endDay) - 1);

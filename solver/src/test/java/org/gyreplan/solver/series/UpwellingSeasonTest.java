@@ -37,6 +37,10 @@ class UpwellingSeasonTest {
         assertEquals(11_618.35, s.totalUpwelling(), 11_618.35 * 1e-4);
         assertEquals(LocalDate.of(YEAR, 4, 16), s.springTransitionDate());
         assertEquals(365, s.cumulative().length);
+        TimeSeries cui = s.cumulativeSeries("CUI", "m3 s-1 (100 m)-1 day");
+        assertEquals(365, cui.size());
+        assertEquals(java.time.Instant.parse("2001-01-02T00:00:00Z"), cui.time(0));   // end of 1 January
+        assertEquals(s.cumulative()[287] - s.cumulative()[105], s.totalUpwelling(), 1e-9);
     }
 
     @Test

@@ -62,6 +62,21 @@ class SeaLevelPressureIndexTest {
     }
 
     @Test
+    void southernMirrorOfAPressureFieldGivesTheSameIndex() {
+        // Reflection y → −y: latitude, ∂p/∂y and the northward part of the offshore normal change sign; the
+        // hemisphere-aware turning must keep the index identical (property; UI-01 ↔ UI-04 are one such pair in form).
+        java.util.Random r = new java.util.Random(5L);
+        for (int k = 0; k < 200; k++) {
+            double px = 2e-3 * r.nextGaussian(), py = 2e-3 * r.nextGaussian();
+            double lat = 6 + 70 * r.nextDouble(), b = 360 * r.nextDouble();
+            double north = CLASSIC.fromGradient(px, py, lat, b), south = CLASSIC.fromGradient(px, -py, -lat, 180 - b);
+            assertEquals(north, south, 1e-10 * Math.max(1, Math.abs(north)));
+            // and rotating the coast by 180° flips it
+            assertEquals(-north, CLASSIC.fromGradient(px, py, lat, b + 180), 1e-10 * Math.max(1, Math.abs(north)));
+        }
+    }
+
+    @Test
     void turningIsTowardLowPressure() {
         // CHECKS pitfall 5: the surface wind has a component down the pressure gradient in both hemispheres.
         for (double lat : new double[] {-50, -20, 20, 50}) {
