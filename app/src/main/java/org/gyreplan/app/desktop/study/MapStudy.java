@@ -37,6 +37,8 @@ public final class MapStudy {
     public final List<Geometry> upwellingZones = new ArrayList<>();
     public Geometry basin;
     public final List<Geometry> exclusions = new ArrayList<>();
+    /** Whether the basin or the exclusion zones were edited in the app (saved back to the scenario). */
+    public boolean basinEdited, exclusionsEdited;
     public final List<IndexPoint> indexPoints = new ArrayList<>();
     public final List<MapPoint> moorings = new ArrayList<>();
     public final List<MapPoint> stations = new ArrayList<>();
