@@ -271,17 +271,21 @@ def make_demo():
     blat = np.arange(23.0, 47.0 + 1e-9, 0.1)
     bathymetry(out / "bathymetry.nc", DEMO_RING, [], blon, blat, title="Merrow Basin synthetic bathymetry")
 
-    # reference numbers (numpy, independent of Gyreplan): constant C_D bounds 1.1e-3 .. 1.3e-3
-    wet = inside(LON, LAT, DEMO_RING)
-    speed = np.hypot(u, v)
-    tx = (RHO_AIR * speed * u).mean(axis=0)
-    ty = (RHO_AIR * speed * v).mean(axis=0)
+    # reference numbers (numpy, independent of Gyreplan), drag law of Large & Yeager (2004) as quoted in CHECKS.md
+    # (10^3 C_D = 2.7/U + 0.142 + U/13.09, the 1/U term floored at U = 0.5 m/s)
+    # strict interior, as Gyreplan's mask (cell centres on the polygon edge are outside)
+    wet = inside(LON, LAT, DEMO_RING) & (distance_km(LON, LAT, DEMO_RING) > 1e-3)
+    speed = np.hypot(u.astype(float), v.astype(float))
+    cd = (2.7 / np.maximum(speed, 0.5) + 0.142 + speed / 13.09) * 1e-3
+    tx = (RHO_AIR * cd * speed * u).mean(axis=0)
+    ty = (RHO_AIR * cd * speed * v).mean(axis=0)
     w = np.cos(np.radians(LAT))[wet]
     mean_tx = np.sum(tx[wet] * w) / np.sum(w)
+    mean_ty = np.sum(ty[wet] * w) / np.sum(w)
     mean_speed = np.sum(speed.mean(axis=0)[wet] * w) / np.sum(w)
-    print(f"demo: mean wind speed {mean_speed:.3f} m/s")
-    print(f"demo: basin-mean eastward stress / C_D = {mean_tx:.2f}; C_D 1.1e-3: {1.1e-3*mean_tx:.5f} Pa, 1.3e-3: {1.3e-3*mean_tx:.5f} Pa")
-    print(f"demo: Sverdrup psi max with C_D 1.2e-3: {sverdrup_max_sv(lon, lat, 1.2e-3*tx, 1.2e-3*ty, wet):.2f} Sv")
+    print(f"demo: mean wind speed {mean_speed:.4f} m/s")
+    print(f"demo: basin-mean stress (LY04) eastward {mean_tx:.6f} Pa, northward {mean_ty:.6f} Pa")
+    print(f"demo: Sverdrup psi max (LY04): {sverdrup_max_sv(lon, lat, tx, ty, wet):.2f} Sv")
 
 
 # ---------------------------------------------------------------- southern coast: Caradoc Sea (pressure)

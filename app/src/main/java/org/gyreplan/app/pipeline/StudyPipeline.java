@@ -1,16 +1,42 @@
 package org.gyreplan.app.pipeline;
 
-import org.gyreplan.app.report.ReportWriter;
-import org.gyreplan.app.render.MapRenderer;
 import org.gyreplan.app.scenario.Headline;
 import org.gyreplan.app.scenario.Scenario;
+import org.gyreplan.app.scenario.ScenarioValidator;
+import org.gyreplan.gisdata.cf.BoundingBox;
+import org.gyreplan.gisdata.cf.GriddedSeries;
+import org.gyreplan.gisdata.cf.VariableMapping;
+import org.gyreplan.gisdata.cf.VariableRole;
 import org.gyreplan.solver.PhysicalConstants;
+import org.gyreplan.solver.atmos.GeostrophicWind;
+import org.gyreplan.solver.atmos.SurfaceWindFromGeostrophic;
+import org.gyreplan.solver.coast.CoastPoint;
+import org.gyreplan.solver.coast.Coastline;
+import org.gyreplan.solver.ekman.EquatorialCutoff;
 import org.gyreplan.solver.grid.LonLatGrid;
 import org.gyreplan.solver.grid.ScalarField;
 import org.gyreplan.solver.grid.VectorField;
+import org.gyreplan.solver.gyre.Geometry;
+import org.gyreplan.solver.gyre.GyreException;
+import org.gyreplan.solver.gyre.GyreProblem;
+import org.gyreplan.solver.gyre.GyreSolution;
+import org.gyreplan.solver.gyre.GyreSolver;
+import org.gyreplan.solver.gyre.WallCondition;
+import org.gyreplan.solver.plan.zones.UpwellingStatistics;
 import org.gyreplan.solver.progress.CancelToken;
 import org.gyreplan.solver.progress.CancelledException;
 import org.gyreplan.solver.progress.ProgressListener;
+import org.gyreplan.solver.series.Aggregation;
+import org.gyreplan.solver.series.Coverage;
+import org.gyreplan.solver.series.MonthlyClimatology;
+import org.gyreplan.solver.series.TimeSeries;
+import org.gyreplan.solver.series.UpwellingSeason;
+import org.gyreplan.solver.stress.DragLaw;
+import org.gyreplan.solver.stress.DragLaws;
+import org.gyreplan.solver.surface.SurfaceResponse;
+import org.gyreplan.solver.upwelling.CoastalUpwellingIndex;
+import org.gyreplan.solver.upwelling.PointIndex;
+import org.locationtech.jts.geom.Envelope;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -19,6 +45,8 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.time.Instant;
+import java.time.LocalDate;
+import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.HexFormat;
@@ -35,24 +63,26 @@ import java.util.Map;
  *   StudyResult r = new StudyPipeline().run(scenario, Path.of("out"), listener, cancelToken);
  * </pre>
  *
- * <p>Stages (each reports progress under its name): inputs (checksums) → grid and basin mask → winds, stress,
- * Ekman (streamed per time step, memory O(grid)) → gyre → coastal index → planning → outputs. Outputs are staged
- * in a hidden folder and moved into {@code outDir} only when the run completes; on cancel or failure nothing is
- * left behind. The physics itself lives in the solver; this class only connects the pieces.
+ * <p>Stages (each reports progress under its name, see {@link #STAGES}): inputs (checksums) → basin (polygon,
+ * coast points) → winds (streamed per time step, memory O(grid): wind → stress → Ekman transport and pumping →
+ * running means, upwelling statistics and the coastal index at each point) → gyre (on the mean stress, basin
+ * mask) → coast (daily and monthly series, climatology, seasons) → planning → outputs. Outputs are staged in a
+ * hidden folder and moved into {@code outDir} only when the run completes; on cancel or failure nothing is left
+ * behind. The physics lives in the solver; this class only connects the pieces.
  */
 public final class StudyPipeline {
 
     /** Stage names, in order, as reported to the {@link ProgressListener}. */
-    public static final List<String> STAGES = List.of("inputs", "grid", "winds", "gyre", "coast", "planning", "outputs");
+    public static final List<String> STAGES = List.of("inputs", "basin", "winds", "gyre", "coast", "planning", "outputs");
 
     /**
      * Runs a scenario.
      *
      * @param scenario a validated scenario (see {@code ScenarioFiles.load})
      * @param outDir   folder for the outputs (created; existing files of the same names are replaced)
-     * @param progress receives stage, fraction and message
+     * @param progress receives stage, fraction and message (may be null)
      * @param cancel   polled between time steps and stages; when cancelled the run throws
-     *                 {@link CancelledException} and leaves no partial files
+     *                 {@link CancelledException} and leaves no partial files (may be null)
      * @throws StudyException when an input cannot be used (message names the file and what was expected)
      */
     public StudyResult run(Scenario scenario, Path outDir, ProgressListener progress, CancelToken cancel)
@@ -63,10 +93,13 @@ public final class StudyPipeline {
         try (OutputFolder out = new OutputFolder(outDir)) {
             st.out = out;
             inputs(st);
-            grid(st);
+            basin(st);
+            winds(st);
+            gyre(st);
+            coast(st);
+            new Planning(st).run();
             st.cancel.check();
-            // Later stages (winds → stress → Ekman, gyre, coast, planning) are added here as the solver provides them.
-            outputs(st, started);
+            new Products(st).write(started);
             st.cancel.check();
             out.commit();
             st.progress.progress("outputs", 1.0, "wrote " + out.files().size() + " files to " + out.target());
@@ -83,6 +116,7 @@ public final class StudyPipeline {
         if (s.winds.file != null) files.add(new String[] {"winds (" + s.winds.source.name().toLowerCase(Locale.ROOT) + ")", s.winds.file});
         if (s.bathymetry != null) files.add(new String[] {"bathymetry", s.bathymetry});
         if (s.exclusionZones != null) files.add(new String[] {"exclusion zones", s.exclusionZones});
+        if (s.sourceFile != null && Files.isRegularFile(s.sourceFile)) files.add(0, new String[] {"scenario", s.sourceFile.toAbsolutePath().toString()});
         for (int k = 0; k < files.size(); k++) {
             st.cancel.check();
             Path p = s.resolve(files.get(k)[1]);
@@ -93,47 +127,42 @@ public final class StudyPipeline {
         st.progress.progress("inputs", 1.0, files.size() + " input files");
     }
 
-    private void grid(RunState st) throws StudyException {
+    private void basin(RunState st) throws StudyException {
         Scenario s = st.scenario;
-        st.progress.progress("grid", 0.0, "study grid");
+        st.progress.progress("basin", 0.0, "basin polygon");
         st.constants = constants(s);
-        double[] box = bounds(s);
+        st.cutoff = EquatorialCutoff.ofDegrees(s.constants.equatorialCutoffDeg == null ? 5.0 : s.constants.equatorialCutoffDeg);
+        st.basin = BasinGeometry.of(s);
+        Envelope e = st.basin.envelope();
         double d = s.grid.spacingDeg;
-        LonLatGrid g = LonLatGrid.covering(box[0], box[1], box[2], box[3], d, st.constants.earthRadius());
-        st.grid = g;
-        st.warn(RunWarning.Kind.GEOMETRY, "the basin mask is not applied in this build (polygon rasterising is not"
-                + " available yet); all cells of the grid bounds are treated as ocean");
-        double[] f = new double[g.size()], beta = new double[g.size()];
-        for (int j = 0; j < g.ny(); j++) {
-            double lat = g.latDeg(j);
-            for (int i = 0; i < g.nx(); i++) {
-                int k = g.index(i, j);
-                f[k] = g.isOcean(k) ? st.constants.coriolis(lat) : Double.NaN;
-                beta[k] = g.isOcean(k) ? st.constants.beta(lat) : Double.NaN;
-            }
+        double[] box = s.grid.westDeg != null
+                ? new double[] {s.grid.westDeg, s.grid.eastDeg, s.grid.southDeg, s.grid.northDeg}
+                : snap(e.getMinX(), e.getMaxX(), e.getMinY(), e.getMaxY(), d);
+        st.studyBox = box;
+        if (st.basin.islandCount() > 0) {
+            st.warn(RunWarning.Kind.GEOMETRY, "the basin has " + st.basin.islandCount() + " island(s); the gyre solver"
+                    + " treats them as described in its own messages below");
         }
-        st.fields.put("coriolis", new ScalarField(g, f, "coriolis_parameter", "s-1",
-                "Coriolis parameter f = 2 Omega sin(latitude), positive in the northern hemisphere"));
-        st.fields.put("beta", new ScalarField(g, beta, "beta", "m-1 s-1",
-                "meridional gradient of the Coriolis parameter, beta = 2 Omega cos(latitude) / R"));
-        st.headlines.put(Headline.OCEAN_CELLS, (double) g.oceanCount());
-        st.progress.progress("grid", 1.0, g.nx() + " × " + g.ny() + " cells of " + d + "°");
-    }
-
-    /** Grid bounds (west, east, south, north; cell edges, degrees) from the scenario. */
-    private static double[] bounds(Scenario s) throws StudyException {
-        Scenario.GridSpec g = s.grid;
-        if (g.westDeg != null) return new double[] {g.westDeg, g.eastDeg, g.southDeg, g.northDeg};
-        if (s.basin.coordinates != null) {
-            double w = Double.POSITIVE_INFINITY, e = Double.NEGATIVE_INFINITY, so = Double.POSITIVE_INFINITY, n = Double.NEGATIVE_INFINITY;
-            for (List<Double> p : s.basin.coordinates) {
-                w = Math.min(w, p.get(0)); e = Math.max(e, p.get(0));
-                so = Math.min(so, p.get(1)); n = Math.max(n, p.get(1));
+        // coast index points along the outer coast of the basin
+        st.progress.progress("basin", 0.5, "coast index points");
+        try {
+            Coastline coast = Coastline.ofBasin(st.basin.mainPolygon(), st.constants);
+            if (s.coast != null && s.coast.smoothingKm != null && s.coast.smoothingKm > 0) {
+                coast = coast.withSmoothingLengthKm(s.coast.smoothingKm);
             }
-            return snap(w, e, so, n, g.spacingDeg);
+            st.coastline = coast;
+            List<CoastPoint> pts = new ArrayList<>();
+            if (s.coast != null && s.coast.points != null) {
+                for (Scenario.NamedPoint p : s.coast.points) pts.add(coast.snap(p.name, p.lonDeg, p.latDeg));
+            } else {
+                double spacing = s.coast == null || s.coast.spacingKm == null ? 100.0 : s.coast.spacingKm;
+                pts.addAll(coast.pointsEvery(spacing, 0, coast.lengthKm()));
+            }
+            st.coastPoints = pts;
+        } catch (IllegalArgumentException ex) {
+            throw new StudyException(s.sourceFile, "coast", ex.getMessage(), ex);
         }
-        throw new StudyException(s.resolve(s.basin.polygon), "basin.polygon",
-                "reading basin polygon files is not available in this build; give basin.coordinates or grid bounds");
+        st.progress.progress("basin", 1.0, st.coastPoints.size() + " coast index points");
     }
 
     /** Bounds widened by one cell and snapped to multiples of the spacing. */
@@ -142,33 +171,287 @@ public final class StudyPipeline {
                 Math.max(-90, Math.floor(s / d) * d - d), Math.min(90, Math.ceil(n / d) * d + d)};
     }
 
-    private void outputs(RunState st, Instant started) throws IOException {
-        st.cancel.check();
-        Scenario s = st.scenario;
-        List<Map.Entry<String, ScalarField>> mapped = new ArrayList<>(st.fields.entrySet());
-        if (s.wants(Scenario.Output.MAPS)) {
-            MapRenderer r = new MapRenderer();
-            for (int k = 0; k < mapped.size(); k++) {
-                st.cancel.check();
-                var e = mapped.get(k);
-                st.progress.progress("outputs", 0.8 * k / mapped.size(), "map " + e.getKey());
-                byte[] png = r.renderPng(MapRenderer.MapSpec.of(e.getValue(), titleOf(e.getValue())));
-                st.out.write("maps/" + e.getKey() + ".png", o -> o.write(png));
-            }
-        }
-        if (s.wants(Scenario.Output.REPORT)) {
-            st.progress.progress("outputs", 0.9, "report");
-            StudyResult draft = st.result(st.out.target(), st.out.files(), provenance(st, started));
-            String html = new ReportWriter().html(draft, rel -> {
-                Path p = st.out.staged(rel);
-                return Files.exists(p) ? Files.readAllBytes(p) : null;
-            });
-            st.out.writeString("report.html", html);
+    private static DragLaw dragLaw(Scenario s) throws StudyException {
+        try {
+            if ("constant".equals(s.dragLaw.name)) return DragLaws.constant(s.dragLaw.dragCoefficient);
+            return DragLaws.byName(s.dragLaw.name);
+        } catch (IllegalArgumentException e) {
+            throw new StudyException(s.sourceFile, "dragLaw.name", e.getMessage(), e);
         }
     }
 
-    private static String titleOf(ScalarField f) {
-        return f.longName() + " (" + f.units() + ")";
+    private void winds(RunState st) throws StudyException, IOException {
+        Scenario s = st.scenario;
+        Path file = s.resolve(s.winds.file);
+        DragLaw law = dragLaw(s);
+        st.dragLaw = law;
+        if (s.winds.source == Scenario.WindSourceKind.STATION) {
+            throw new StudyException(file, "winds.source", "station winds are not wired into the run in this build;"
+                    + " use a gridded or pressure source");
+        }
+        Envelope e = st.basin.envelope();
+        // one degree of margin so that the coast and the derivatives next to it have data on both sides
+        BoundingBox box = new BoundingBox(e.getMinX() - 1, e.getMaxX() + 1, Math.max(-90, e.getMinY() - 1), Math.min(90, e.getMaxY() + 1));
+        Instant from = ScenarioValidator.parseInstant(s.winds.start).orElse(null);
+        Instant to = ScenarioValidator.parseInstant(s.winds.end).map(t -> s.winds.end.length() <= 10 ? t.plusSeconds(86399) : t).orElse(null);
+        VariableMapping mapping = mapping(s);
+        boolean pressure = s.winds.source == Scenario.WindSourceKind.PRESSURE;
+        st.progress.progress("winds", 0.0, "opening " + file.getFileName());
+        try (GriddedSeries series = pressure
+                ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, box, from, to)
+                : GriddedSeries.openWind(file, mapping, box, from, to)) {
+            LonLatGrid raw = series.grid();
+            checkCoverage(st, raw, e, file);
+            LonLatGrid g = st.basin.mask(raw);
+            if (g.oceanCount() == 0) {
+                throw new StudyException(file, "basin", "no wind-grid cell centre lies inside the basin; the wind grid ("
+                        + raw.dLonDeg() + "° spacing) is too coarse for this basin");
+            }
+            st.windGrid = g;
+            int nt = series.size();
+            if (nt == 0) throw new StudyException(file, "winds.start/end", "no time steps in the chosen window");
+            SurfaceResponse response = new SurfaceResponse(law, st.constants, st.cutoff);
+            SurfaceAccumulator acc = new SurfaceAccumulator(g);
+            UpwellingStatistics stats = UpwellingStatistics.on(g);
+            CoastalUpwellingIndex index = CoastalUpwellingIndex.defaults().withConstants(st.constants)
+                    .withEquatorialCutoffDeg(st.cutoff.latitudeDeg());
+            int np = st.coastPoints.size();
+            double[][] ui = new double[np][nt];
+            Instant[] times = new Instant[nt];
+            for (int k = 0; k < nt; k++) {
+                st.cancel.check();
+                GriddedSeries.Step step = series.read(k);
+                times[k] = step.time() != null ? step.time() : Instant.EPOCH.plusSeconds(86400L * k);
+                VectorField wind;
+                if (pressure) {
+                    ScalarField p = on(g, step.fields().get(0));
+                    VectorField geo = GeostrophicWind.field(p, st.constants, st.cutoff).wind();
+                    wind = SurfaceWindFromGeostrophic.DEFAULT.apply(geo);
+                } else {
+                    wind = new VectorField(on(g, step.fields().get(0)), on(g, step.fields().get(1)));
+                }
+                SurfaceResponse.Step r = response.fromWind(wind);
+                acc.add(wind, r);
+                stats.add(times[k], r.ekmanPumping());
+                List<PointIndex> at = index.atPoints(r.stress(), st.coastPoints);
+                for (int p = 0; p < np; p++) ui[p][k] = at.get(p).indexM3PerSPer100m();
+                if (k % 10 == 0 || k == nt - 1) {
+                    st.progress.progress("winds", (k + 1.0) / nt, "step " + (k + 1) + "/" + nt + " "
+                            + times[k].toString().substring(0, 10));
+                }
+            }
+            st.times = times;
+            st.indexRaw = ui;
+            st.stats = stats;
+            st.fields.put("wind_speed", acc.meanSpeed());
+            VectorField tau = acc.meanStress();
+            st.vectors.put("stress", tau);
+            st.fields.put("stress_magnitude", magnitude(tau, "wind_stress_magnitude", "magnitude of the time-mean wind stress"));
+            st.fields.put("stress_curl", acc.meanCurl());
+            VectorField ek = acc.meanEkmanTransport();
+            st.vectors.put("ekman_transport", ek);
+            st.fields.put("ekman_transport_magnitude", magnitude(ek, "ekman_transport_magnitude", "magnitude of the time-mean Ekman transport per unit width"));
+            ScalarField w = acc.meanPumping();
+            st.fields.put("ekman_pumping", w);
+            st.fields.put("upwelling_persistence", stats.persistenceField().renamed("upwelling_persistence", "1",
+                    "fraction of time steps with upward Ekman pumping (0 to 1)"));
+            st.headlines.put(Headline.TIME_STEPS, (double) nt);
+            st.headlines.put(Headline.OCEAN_CELLS, (double) g.oceanCount());
+            st.headlines.put(Headline.MEAN_WIND_SPEED, acc.meanSpeed().areaMean());
+            st.headlines.put(Headline.MEAN_EASTWARD_STRESS, tau.eastward().areaMean());
+            st.headlines.put(Headline.MEAN_NORTHWARD_STRESS, tau.northward().areaMean());
+            st.headlines.put(Headline.MAX_MEAN_STRESS, st.fields.get("stress_magnitude").range()[1]);
+            st.headlines.put(Headline.MEAN_EKMAN_PUMPING, w.areaMean());
+            st.headlines.put(Headline.MAX_EKMAN_PUMPING, w.range()[1]);
+            st.headlines.put(Headline.MIN_EKMAN_PUMPING, w.range()[0]);
+            st.headlines.put(Headline.EQUATORIAL_CELLS, (double) acc.cutoffCells());
+            if (acc.cutoffCells() > 0) {
+                st.warn(RunWarning.Kind.EQUATORIAL, acc.cutoffCells() + " ocean cells lie within " + st.cutoff.latitudeDeg()
+                        + "° of the equator; Ekman transport and pumping are undefined there and left empty");
+            }
+            if (acc.missingOceanValues() > 0) {
+                st.warn(RunWarning.Kind.DATA_GAP, acc.missingOceanValues() + " missing wind values over ocean cells ("
+                        + String.format(Locale.ROOT, "%.2f", 100.0 * acc.missingOceanValues() / ((double) nt * g.oceanCount()))
+                        + " % of cell-steps); means use the available steps of each cell");
+            }
+            if (acc.dragOutOfRange() > 0) {
+                st.warn(RunWarning.Kind.DRAG_RANGE, acc.dragOutOfRange() + " cell-steps had wind speeds outside the validity range of "
+                        + law.name() + " (" + String.format(Locale.ROOT, "%.2f", 100.0 * acc.dragOutOfRange() / ((double) nt * g.oceanCount()))
+                        + " % of cell-steps)");
+            }
+            st.provenanceExtra.put("wind grid", raw.nx() + " × " + raw.ny() + " cells of " + raw.dLonDeg() + "° × "
+                    + raw.dLatDeg() + "°, " + g.oceanCount() + " inside the basin");
+            st.provenanceExtra.put("time steps", nt + " (" + times[0] + " to " + times[nt - 1] + ")");
+            st.provenanceExtra.put("wind variables", String.join(", ", series.variables().stream().map(v -> v.name()).toList()));
+            if (pressure) {
+                st.provenanceExtra.put("surface wind from pressure", "geostrophic wind × " + SurfaceWindFromGeostrophic.DEFAULT.reductionFactor()
+                        + ", turned " + SurfaceWindFromGeostrophic.DEFAULT.turningAngleDeg() + "° toward low pressure");
+            }
+        } catch (IllegalArgumentException ex) {
+            throw new StudyException(file, "winds", ex.getMessage(), ex);
+        } catch (IOException ex) {
+            if (ex instanceof java.nio.file.NoSuchFileException) throw ex;
+            throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
+        }
+    }
+
+    private static ScalarField on(LonLatGrid masked, ScalarField f) {
+        double[] v = f.values().clone();
+        for (int k = 0; k < v.length; k++) if (!masked.isOcean(k)) v[k] = Double.NaN;
+        return new ScalarField(masked, v, f.name(), f.units(), f.longName());
+    }
+
+    private static ScalarField magnitude(VectorField v, String name, String longName) {
+        double[] m = new double[v.grid().size()];
+        for (int k = 0; k < m.length; k++) m[k] = v.magnitude(k);
+        return new ScalarField(v.grid(), m, name, v.units(), longName);
+    }
+
+    private static VariableMapping mapping(Scenario s) {
+        VariableMapping m = VariableMapping.automatic();
+        if (s.winds.variables == null) return m;
+        for (Map.Entry<String, String> e : s.winds.variables.entrySet()) {
+            VariableRole role = switch (e.getKey()) {
+                case "eastward" -> VariableRole.EASTWARD_WIND;
+                case "northward" -> VariableRole.NORTHWARD_WIND;
+                case "pressure" -> VariableRole.SEA_LEVEL_PRESSURE;
+                default -> null;
+            };
+            if (role != null) m = m.with(role, e.getValue());
+        }
+        return m;
+    }
+
+    /** The basin must lie inside the wind data (half a wind cell of tolerance). */
+    private static void checkCoverage(RunState st, LonLatGrid raw, Envelope e, Path file) throws StudyException {
+        double tolLon = 0.5 * raw.dLonDeg(), tolLat = 0.5 * raw.dLatDeg();
+        double w = raw.lon0Deg(), east = raw.lonDeg(raw.nx() - 1), s = raw.latDeg(0), n = raw.latDeg(raw.ny() - 1);
+        boolean inside = e.getMinX() >= w - tolLon && e.getMaxX() <= east + tolLon && e.getMinY() >= s - tolLat && e.getMaxY() <= n + tolLat;
+        if (!inside) {
+            throw new StudyException(file, "basin", String.format(Locale.ROOT,
+                    "the basin (lon %.2f…%.2f°, lat %.2f…%.2f°) extends outside the wind data (cell centres lon %.2f…%.2f°, lat %.2f…%.2f°);"
+                            + " use wind data that cover the basin or a smaller basin",
+                    e.getMinX(), e.getMaxX(), e.getMinY(), e.getMaxY(), w, east, s, n));
+        }
+    }
+
+    private void gyre(RunState st) throws StudyException {
+        Scenario s = st.scenario;
+        st.cancel.check();
+        double d = s.gyre.spacingDeg != null ? s.gyre.spacingDeg : s.grid.spacingDeg;
+        double[] b = st.studyBox;
+        LonLatGrid g = st.basin.mask(LonLatGrid.covering(b[0], b[1], b[2], b[3], d, st.constants.earthRadius()));
+        st.grid = g;
+        VectorField tauWind = st.vectors.get("stress");
+        double[] tx = new double[g.size()], ty = new double[g.size()];
+        for (int j = 0; j < g.ny(); j++) {
+            for (int i = 0; i < g.nx(); i++) {
+                int k = g.index(i, j);
+                boolean ocean = g.isOcean(k);
+                tx[k] = ocean ? tauWind.eastward().interpolate(g.lonDeg(i), g.latDeg(j)) : Double.NaN;
+                ty[k] = ocean ? tauWind.northward().interpolate(g.lonDeg(i), g.latDeg(j)) : Double.NaN;
+            }
+        }
+        VectorField tau = new VectorField(new ScalarField(g, tx, tauWind.eastward().name(), "Pa", tauWind.eastward().longName()),
+                new ScalarField(g, ty, tauWind.northward().name(), "Pa", tauWind.northward().longName()));
+        GyreProblem.Builder pb = GyreProblem.on(g).stress(tau).constants(st.constants).depth(s.gyre.depth)
+                .geometry(Geometry.sphere()).options(GyreProblem.Options.defaults().withThreads(1));
+        switch (s.gyre.model) {
+            case STOMMEL -> pb.stommel(s.gyre.bottomFriction);
+            case MUNK -> {
+                pb.munk(s.gyre.lateralViscosity, s.gyre.wall == Scenario.Wall.FREE_SLIP ? WallCondition.FREE_SLIP : WallCondition.NO_SLIP);
+                if (s.gyre.bottomFriction != null) pb.stommel(s.gyre.bottomFriction);
+            }
+            case SVERDRUP -> pb.stommel(s.gyre.bottomFriction != null ? s.gyre.bottomFriction : 0.0);
+        }
+        GyreSolution sol;
+        try {
+            sol = GyreSolver.solve(pb.build(), (stage, f, m) -> st.progress.progress("gyre", f, m), st.cancel);
+        } catch (GyreException ex) {
+            st.warn(RunWarning.Kind.GEOMETRY, "gyre not solved: " + ex.getMessage());
+            st.progress.progress("gyre", 1.0, "not solved");
+            return;
+        } catch (IllegalArgumentException ex) {
+            throw new StudyException(s.sourceFile, "gyre", ex.getMessage(), ex);
+        }
+        ScalarField psi = s.gyre.model == Scenario.GyreModel.SVERDRUP ? sol.sverdrup() : sol.streamfunction();
+        st.fields.put("streamfunction", psi);
+        st.gyre = sol;
+        for (String w : sol.warnings()) {
+            RunWarning.Kind k = w.toLowerCase(Locale.ROOT).contains("resolution") || w.toLowerCase(Locale.ROOT).contains("cells")
+                    ? RunWarning.Kind.RESOLUTION : RunWarning.Kind.GEOMETRY;
+            st.warn(k, "gyre: " + w);
+        }
+        double[] r = psi.range();
+        st.headlines.put(Headline.MAX_STREAMFUNCTION, r[1]);
+        st.headlines.put(Headline.MIN_STREAMFUNCTION, r[0]);
+        if (sol.sverdrup() != null) st.headlines.put(Headline.MAX_SVERDRUP, sol.sverdrup().range()[1]);
+        if (sol.diagnostics() != null && Double.isFinite(sol.diagnostics().peakTransportSv())) {
+            st.headlines.put(Headline.WESTERN_BOUNDARY_TRANSPORT, sol.diagnostics().peakTransportSv());
+        }
+        st.provenanceExtra.put("gyre grid", g.nx() + " × " + g.ny() + " cells of " + d + "°, " + g.oceanCount() + " ocean");
+        st.progress.progress("gyre", 1.0, String.format(Locale.ROOT, "ψ %.1f…%.1f Sv", r[0], r[1]));
+    }
+
+    private void coast(RunState st) {
+        st.cancel.check();
+        int np = st.coastPoints.size();
+        List<LocalDate> days = new ArrayList<>();
+        for (Instant t : st.times) days.add(t.atZone(ZoneOffset.UTC).toLocalDate());
+        double[] meanOver = new double[st.times.length];
+        int[] countOver = new int[st.times.length];
+        List<CoastSeries> out = new ArrayList<>();
+        for (int p = 0; p < np; p++) {
+            CoastPoint cp = st.coastPoints.get(p);
+            TimeSeries raw = TimeSeries.of(cp.name(), CoastalUpwellingIndex.UNITS, st.times, st.indexRaw[p]);
+            out.add(CoastSeries.of(cp, raw));
+            for (int k = 0; k < st.times.length; k++) {
+                if (Double.isFinite(st.indexRaw[p][k])) { meanOver[k] += st.indexRaw[p][k]; countOver[k]++; }
+            }
+            st.progress.progress("coast", (p + 1.0) / (np + 1), cp.name());
+        }
+        for (int k = 0; k < meanOver.length; k++) meanOver[k] = countOver[k] > 0 ? meanOver[k] / countOver[k] : Double.NaN;
+        st.coastSeries = out;
+        if (np > 0) {
+            CoastSeries all = CoastSeries.of(null, TimeSeries.of("coast mean", CoastalUpwellingIndex.UNITS, st.times, meanOver));
+            st.coastMean = all;
+            double sum = 0; int n = 0;
+            for (double v : all.daily().values()) if (Double.isFinite(v)) { sum += v; n++; }
+            if (n > 0) st.headlines.put(Headline.MEAN_COASTAL_INDEX, sum / n);
+            if (all.climatology() != null) st.headlines.put(Headline.PEAK_INDEX_MONTH, (double) all.climatology().maxMonth());
+            double sti = 0; int ns = 0;
+            for (UpwellingSeason.Season s : all.seasons()) if (s.isResolved()) { sti += s.springTransitionDay(); ns++; }
+            if (ns > 0) st.headlines.put(Headline.SPRING_TRANSITION_DAY, sti / ns);
+        }
+        for (CoastSeries cs : out) {
+            double[] v = cs.daily().values();
+            List<LocalDate> d = new ArrayList<>();
+            for (int k = 0; k < cs.daily().size(); k++) d.add(cs.daily().time(k).atZone(ZoneOffset.UTC).toLocalDate());
+            st.series.add(new NamedSeries(cs.point().name(), "coastal upwelling index", CoastalUpwellingIndex.UNITS, d, v,
+                    cs.point().lonDeg(), cs.point().latDeg()));
+        }
+        st.progress.progress("coast", 1.0, np + " index series");
+    }
+
+    /** Daily, monthly, climatology and seasons of one coastal index series. */
+    record CoastSeries(CoastPoint point, TimeSeries daily, TimeSeries monthly, MonthlyClimatology climatology,
+                       List<UpwellingSeason.Season> seasons) {
+        static CoastSeries of(CoastPoint p, TimeSeries raw) {
+            TimeSeries daily = raw.medianStepSeconds() >= 86400 ? raw : Aggregation.daily(raw, Coverage.DEFAULT).means();
+            TimeSeries monthly = Aggregation.monthly(daily, Coverage.DEFAULT).means();
+            MonthlyClimatology clim = null;
+            if (monthly.size() > 0) {
+                int y0 = monthly.time(0).atZone(ZoneOffset.UTC).getYear();
+                int y1 = monthly.time(monthly.size() - 1).atZone(ZoneOffset.UTC).getYear();
+                try {
+                    clim = MonthlyClimatology.of(monthly, y0, y1, 1);
+                } catch (IllegalArgumentException e) {
+                    clim = null;
+                }
+            }
+            List<UpwellingSeason.Season> seasons = UpwellingSeason.perYear(daily, UpwellingSeason.Options.DEFAULT);
+            return new CoastSeries(p, daily, monthly, clim, seasons);
+        }
     }
 
     // ------------------------------------------------------------------------------------------- helpers
@@ -184,30 +467,31 @@ public final class StudyPipeline {
         return c;
     }
 
-    private Provenance provenance(RunState st, Instant started) {
+    Provenance provenance(RunState st, Instant started) {
         Map<String, String> p = new LinkedHashMap<>();
         Scenario s = st.scenario;
         PhysicalConstants c = st.constants == null ? constants(s) : st.constants;
         p.put("scenario", s.sourceFile == null ? "(in memory)" : s.sourceFile.toString());
-        p.put("grid spacing", s.grid.spacingDeg + "°");
-        if (st.grid != null) p.put("grid", st.grid.nx() + " × " + st.grid.ny() + " cells, lon "
+        p.put("basin", (s.basin.name == null ? "" : s.basin.name + ", ") + (s.basin.polygon != null ? s.basin.polygon : "inline coordinates"));
+        if (st.grid != null) p.put("study grid", st.grid.nx() + " × " + st.grid.ny() + " cells, lon "
                 + fmt(st.grid.westDeg()) + "…" + fmt(st.grid.eastDeg()) + "°, lat " + fmt(st.grid.southDeg()) + "…" + fmt(st.grid.northDeg()) + "°");
         p.put("wind source", s.winds.source.name().toLowerCase(Locale.ROOT) + " " + s.winds.file);
         p.put("time window", (s.winds.start == null ? "start of data" : s.winds.start) + " to "
                 + (s.winds.end == null ? "end of data" : s.winds.end));
-        p.put("drag law", s.dragLaw.name + (s.dragLaw.dragCoefficient != null ? " (C_D = " + s.dragLaw.dragCoefficient + ")" : ""));
+        p.put("drag law", st.dragLaw != null ? st.dragLaw.name() + " (" + st.dragLaw.id() + ")" : s.dragLaw.name);
         p.put("ρ₀ (sea water)", c.rho0() + " kg m⁻³");
         p.put("ρₐ (air)", c.rhoAir() + " kg m⁻³");
         p.put("Ω", c.omega() + " rad s⁻¹");
         p.put("R (Earth radius)", c.earthRadius() + " m");
-        p.put("equatorial cut-off", s.constants.equatorialCutoffDeg + "°");
+        p.put("equatorial cut-off", (s.constants.equatorialCutoffDeg == null ? 5.0 : s.constants.equatorialCutoffDeg) + "° (Ekman quantities undefined closer to the equator)");
         p.put("gyre model", s.gyre.model.name().toLowerCase(Locale.ROOT)
                 + (s.gyre.bottomFriction != null ? ", r = " + s.gyre.bottomFriction + " s⁻¹" : "")
                 + (s.gyre.lateralViscosity != null ? ", A_H = " + s.gyre.lateralViscosity + " m² s⁻¹" : "")
                 + (s.gyre.wall != null ? ", " + s.gyre.wall.name().toLowerCase(Locale.ROOT).replace('_', '-') + " walls" : "")
                 + ", H = " + s.gyre.depth + " m");
-        if (s.coast != null) p.put("coast index", "spacing " + s.coast.spacingKm + " km, smoothing "
-                + s.coast.smoothingKm + " km, band " + s.coast.bandWidthKm + " km");
+        if (s.coast != null) p.put("coast index", (s.coast.points != null ? s.coast.points.size() + " named points" : "every " + s.coast.spacingKm + " km")
+                + ", orientation smoothed over " + s.coast.smoothingKm + " km, band " + s.coast.bandWidthKm + " km");
+        p.putAll(st.provenanceExtra);
         return new Provenance(List.copyOf(st.inputs), p, Version.current(), System.getProperty("java.version"),
                 started, Instant.now());
     }
@@ -239,8 +523,22 @@ public final class StudyPipeline {
         final Map<Headline, Double> headlines = new EnumMap<>(Headline.class);
         final List<RunWarning> warnings = new ArrayList<>();
         final Map<String, Object> products = new LinkedHashMap<>();
+        final Map<String, String> provenanceExtra = new LinkedHashMap<>();
         PhysicalConstants constants;
+        EquatorialCutoff cutoff;
+        DragLaw dragLaw;
+        BasinGeometry basin;
+        double[] studyBox;
+        Coastline coastline;
+        List<CoastPoint> coastPoints = List.of();
+        LonLatGrid windGrid;
         LonLatGrid grid;
+        Instant[] times = new Instant[0];
+        double[][] indexRaw = new double[0][];
+        UpwellingStatistics stats;
+        GyreSolution gyre;
+        List<CoastSeries> coastSeries = List.of();
+        CoastSeries coastMean;
         OutputFolder out;
 
         RunState(Scenario scenario, ProgressListener progress, CancelToken cancel) {
@@ -252,7 +550,8 @@ public final class StudyPipeline {
         void warn(RunWarning.Kind kind, String message) { warnings.add(new RunWarning(kind, message)); }
 
         StudyResult result(Path dir, List<Path> files, Provenance prov) {
-            return new StudyResult(scenario, dir, grid, fields, vectors, series, headlines, warnings, files, products, prov);
+            return new StudyResult(scenario, dir, grid != null ? grid : windGrid, fields, vectors, series, headlines,
+                    warnings, files, products, prov);
         }
     }
 }

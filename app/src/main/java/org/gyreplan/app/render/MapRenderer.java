@@ -54,6 +54,7 @@ public final class MapRenderer {
         double[] contourLevels;
         String contourLabel;
         final List<List<double[]>> land = new ArrayList<>();
+        final List<List<double[]>> coast = new ArrayList<>();
         final List<Overlay> overlays = new ArrayList<>();
         LonLatGrid extent;
 
@@ -78,6 +79,8 @@ public final class MapRenderer {
         }
         /** A land polygon ring as [lonDeg, latDeg] points (from the base map). */
         public MapSpec land(List<double[]> ring) { this.land.add(ring); return this; }
+        /** A coastline ring (e.g. of the basin polygon) drawn as a line instead of the mask's cell edges. */
+        public MapSpec coastline(List<double[]> ring) { this.coast.add(ring); return this; }
         public MapSpec overlay(Overlay o) { this.overlays.add(o); return this; }
     }
 
@@ -158,10 +161,11 @@ public final class MapRenderer {
             gr.setStroke(new BasicStroke(0.8f));
             gr.draw(path);
         }
-        // coastline of the mask: edges between ocean and land cells
+        // coastline: the given rings, or else the edges between ocean and land cells of the mask
         gr.setColor(LAND_EDGE);
         gr.setStroke(new BasicStroke(1.3f));
-        for (int j = 0; j < fg.ny(); j++) {
+        for (List<double[]> ring : m.coast) gr.draw(p.path(ring, true));
+        for (int j = 0; m.coast.isEmpty() && j < fg.ny(); j++) {
             for (int i = 0; i < fg.nx(); i++) {
                 if (!fg.isOcean(i, j)) continue;
                 double lw = fg.lonDeg(i) - fg.dLonDeg() / 2, le = lw + fg.dLonDeg();
@@ -304,7 +308,11 @@ public final class MapRenderer {
                     gr.setStroke(new BasicStroke(1f));
                     gr.draw(s);
                     if (o.labels() != null && k < o.labels().size() && o.labels().get(k) != null) {
-                        haloText(gr, o.labels().get(k), (float) x + 8, (float) y + 4);
+                        String lab = o.labels().get(k);
+                        int w = gr.getFontMetrics().stringWidth(lab);
+                        java.awt.Rectangle clip = gr.getClipBounds();
+                        boolean left = clip != null && x + 8 + w > clip.getMaxX() - 2;
+                        haloText(gr, lab, (float) (left ? x - 8 - w : x + 8), (float) y + 4);
                     }
                 }
             }

@@ -20,6 +20,7 @@ public enum Headline {
     MIN_EKMAN_PUMPING("minEkmanPumping", "m s-1", "most negative time-mean Ekman pumping (downwelling)"),
     EQUATORIAL_CELLS("equatorialCells", "1", "ocean cells inside the equatorial cut-off"),
     MAX_STREAMFUNCTION("maxStreamfunctionSv", "Sv", "largest depth-integrated streamfunction"),
+    MAX_SVERDRUP("maxSverdrupSv", "Sv", "largest Sverdrup streamfunction (interior balance, zero on the eastern coast)"),
     MIN_STREAMFUNCTION("minStreamfunctionSv", "Sv", "smallest depth-integrated streamfunction"),
     WESTERN_BOUNDARY_TRANSPORT("westernBoundaryTransportSv", "Sv", "largest western-boundary-current transport"),
     MEAN_COASTAL_INDEX("meanCoastalIndex", "m3 s-1 per 100 m", "mean coastal upwelling index over all index points and days"),

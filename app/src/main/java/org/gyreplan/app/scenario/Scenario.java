@@ -223,7 +223,7 @@ public final class Scenario {
         public Double maxDepth = 2000.0;
         public Double minSeparationKm = 30.0;
         public Double maxDistanceFromPortKm;
-        /** Relative weights of the ranking criteria, e.g. {upwelling: 0.5, persistence: 0.3, depth: 0.1, distance: 0.1}. */
+        /** Relative weights of the ranking criteria: persistence, intensity, variability, portProximity (≥ 0). */
         public Map<String, Double> weights;
     }
 

@@ -27,7 +27,7 @@ public final class ScenarioValidator {
     public static final Set<String> WIND_VARIABLE_ROLES =
             Set.of("eastward", "northward", "speed", "direction", "pressure", "time", "longitude", "latitude");
     /** Criteria a {@code moorings.weights} block may weigh. */
-    public static final Set<String> MOORING_WEIGHTS = Set.of("upwelling", "persistence", "depth", "distance");
+    public static final Set<String> MOORING_WEIGHTS = Set.of("persistence", "intensity", "variability", "portProximity");
 
     /** Validates an in-memory scenario (e.g. edited in the desktop app); no line numbers. */
     public static List<ScenarioProblem> validate(Scenario s) {

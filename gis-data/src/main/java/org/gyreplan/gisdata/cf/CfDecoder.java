@@ -30,7 +30,9 @@ public final class CfDecoder {
         DataType t = v.dataType();
         this.fill = f != null && !f.isText() ? f.number(0) : (t == DataType.BYTE ? Double.NaN : t.defaultFill());
         Attribute mv = v.attribute("missing_value");
-        this.missing = mv != null && !mv.isText() ? mv.numbers().clone() : new double[0];
+        // missing values other than the fill value (files often repeat _FillValue as missing_value)
+        this.missing = mv != null && !mv.isText()
+                ? java.util.Arrays.stream(mv.numbers()).filter(x -> x != fill).distinct().toArray() : new double[0];
         double lo = Double.NEGATIVE_INFINITY, hi = Double.POSITIVE_INFINITY;
         Attribute vr = v.attribute("valid_range");
         if (vr != null && !vr.isText() && vr.length() == 2) { lo = vr.number(0); hi = vr.number(1); }

@@ -176,6 +176,21 @@ public final class HorizontalSubset {
         int nx = grid.nx(), ny = grid.ny();
         int[] colOff = new int[nx];
         for (int i = 0; i < nx; i++) colOff[i] = (srcCol[i] - colStart) * strideLon;
+        if (strideLon == 1) {
+            // rows are contiguous in the block: copy runs of consecutive source columns
+            for (int j = 0; j < ny; j++) {
+                int rowOff = (srcRow[j] - rowStart) * strideLat;
+                int o = j * nx;
+                int i = 0;
+                while (i < nx) {
+                    int e = i + 1;
+                    while (e < nx && colOff[e] == colOff[e - 1] + 1) e++;
+                    System.arraycopy(block, rowOff + colOff[i], out, o + i, e - i);
+                    i = e;
+                }
+            }
+            return block;
+        }
         for (int j = 0; j < ny; j++) {
             int rowOff = (srcRow[j] - rowStart) * strideLat;
             int o = j * nx;

@@ -1,7 +1,9 @@
 package org.gyreplan.gisdata.csv;
 
 import org.gyreplan.gisdata.csv.CsvFormatException.Problem;
-import org.gyreplan.solver.DegreeTrig;
+import org.gyreplan.gisdata.units.UnitConversions;
+import org.gyreplan.solver.stress.WindVector;
+import org.gyreplan.solver.stress.WindVectors;
 
 import java.io.IOException;
 import java.nio.charset.CharacterCodingException;
@@ -37,10 +39,12 @@ import java.util.Set;
  *       {@code v10}, {@code northward}, {@code northward_wind}).</li>
  * </ul>
  * Speed units come from the header ({@code speed [kn]}, {@code u (m/s)}) or, for columns without one, from
- * {@link Options#speedUnit()}; a column with neither is refused. See {@link SpeedUnit} for the spellings.
+ * {@link Options#speedUnit()}; a column with neither is refused. See {@link SpeedUnit} for the spellings (the
+ * speed units of {@link UnitConversions} are accepted too).
  *
  * <p>Direction is meteorological: the direction the wind blows <em>from</em>, degrees clockwise from true north
- * (WMO, Manual on Codes; common practice). The vector the air moves toward is
+ * (WMO convention; common practice), converted by the solver's {@link WindVectors#fromMeteorological}. The vector
+ * the air moves toward is
  * <pre>
  *   u = −s · sin θ,   v = −s · cos θ
  * </pre>
@@ -223,9 +227,13 @@ public final class StationWindCsv {
                 if (s == 0) {
                     u[r - 1] = 0;
                     v[r - 1] = 0;
+                } else if (Double.isNaN(s) || Double.isNaN(d)) {
+                    u[r - 1] = Double.NaN;
+                    v[r - 1] = Double.NaN;
                 } else {
-                    u[r - 1] = -s * DegreeTrig.sinDeg(d);
-                    v[r - 1] = -s * DegreeTrig.cosDeg(d);
+                    WindVector w = WindVectors.fromMeteorological(s, d);
+                    u[r - 1] = w.eastward();
+                    v[r - 1] = w.northward();
                 }
             } else {
                 double a = number(file, lineNo, titles.get(cU).raw(), f.get(cU)) * fA;
@@ -268,8 +276,13 @@ public final class StationWindCsv {
 
     private static double speedFactor(Path file, Title t, Options o, int line) throws CsvFormatException {
         if (t.unit() != null) {
-            return SpeedUnit.parse(t.unit()).orElseThrow(() -> new CsvFormatException(Problem.UNKNOWN_UNIT, file, line, t.raw(),
-                    "unknown speed unit \"" + t.unit() + "\"; accepted: " + SpeedUnit.accepted())).toMetrePerSecond();
+            var known = SpeedUnit.parse(t.unit());
+            if (known.isPresent()) return known.get().toMetrePerSecond();
+            if (UnitConversions.isKnown(UnitConversions.Quantity.SPEED, t.unit())) {
+                return UnitConversions.factorToSI(UnitConversions.Quantity.SPEED, t.unit());
+            }
+            throw new CsvFormatException(Problem.UNKNOWN_UNIT, file, line, t.raw(), "unknown speed unit \"" + t.unit()
+                    + "\"; accepted: " + SpeedUnit.accepted() + " (and the speed units of the netCDF reader, e.g. cm/s)");
         }
         if (o.speedUnit() != null) return o.speedUnit().toMetrePerSecond();
         throw new CsvFormatException(Problem.UNKNOWN_UNIT, file, line, t.raw(), "no speed unit; write it in the header"

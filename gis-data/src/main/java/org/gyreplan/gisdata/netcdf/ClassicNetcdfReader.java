@@ -24,6 +24,9 @@ import java.util.List;
  */
 public final class ClassicNetcdfReader implements NetcdfDataset {
     private static final int NC_DIMENSION = 0x0A;
+    /** Per-thread read buffer (reads stay thread-safe, no allocation per read). */
+    private static final ThreadLocal<ByteBuffer> BUFFER =
+            ThreadLocal.withInitial(() -> ByteBuffer.allocate(1 << 16).order(ByteOrder.BIG_ENDIAN));
     private static final int NC_VARIABLE = 0x0B;
     private static final int NC_ATTRIBUTE = 0x0C;
 
@@ -391,7 +394,11 @@ public final class ClassicNetcdfReader implements NetcdfDataset {
         private void readRun(long byteOffset, int n, double[] dst, int at) throws IOException {
             int es = type.size();
             final int chunk = Math.max(1, (1 << 20) / es);
-            ByteBuffer b = ByteBuffer.allocate(Math.min(n, chunk) * es).order(ByteOrder.BIG_ENDIAN);
+            ByteBuffer b = BUFFER.get();
+            if (b.capacity() < Math.min(n, chunk) * es) {
+                b = ByteBuffer.allocate(Math.max(Math.min(n, chunk) * es, 4096)).order(ByteOrder.BIG_ENDIAN);
+                BUFFER.set(b);
+            }
             int done = 0;
             while (done < n) {
                 int m = Math.min(chunk, n - done);

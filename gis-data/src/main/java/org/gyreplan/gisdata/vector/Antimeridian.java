@@ -83,7 +83,7 @@ public final class Antimeridian {
             }
             parts.add(p);
         }
-        if (!shifted && dim < 2) return g;
+        if (!shifted) return g;
         if (dim == 2) {
             Geometry u = UnaryUnionOp.union(parts);
             if (u == null) return f.createMultiPolygon();

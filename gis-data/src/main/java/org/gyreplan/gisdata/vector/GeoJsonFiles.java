@@ -71,7 +71,8 @@ public final class GeoJsonFiles {
 
     /**
      * Reads every feature of a GeoJSON file (points, lines, polygons and their Multi- forms) with its properties.
-     * Polygons are checked as in {@link PolygonFiles} (closed rings, at least 4 points, valid).
+     * Polygon rings must be closed with at least 4 points; polygon validity (self-intersection etc.) is not checked
+     * here — read basins and zones with {@link PolygonFiles}, which does.
      */
     public static FeatureLayer readFeatures(Path file) throws IOException {
         List<Feature> out = new ArrayList<>();
@@ -79,7 +80,8 @@ public final class GeoJsonFiles {
         for (int k = 0; k < features.size(); k++) {
             Map<String, Object> f = features.get(k);
             Map<String, Object> props = properties(file, k, f);
-            PolygonAssembly a = new PolygonAssembly(file, k, PolygonAssembly.nameFrom(props, f.get("id")), false);
+            PolygonAssembly a = new PolygonAssembly(file, k, PolygonAssembly.nameFrom(props, f.get("id")), false)
+                    .withoutValidation();
             Object g = f.get("geometry");
             if (!(g instanceof Map)) throw a.error(Problem.UNREADABLE, null, "has no geometry");
             out.add(new Feature(geometry(a, (Map<?, ?>) g), props));

@@ -38,12 +38,19 @@ final class PolygonAssembly {
     private final String name;
     private final boolean repair;
     private boolean repaired;
+    private boolean validate = true;
 
     PolygonAssembly(Path file, int index, String name, boolean repair) {
         this.file = file;
         this.index = index;
         this.name = name;
         this.repair = repair;
+    }
+
+    /** Skips the IsValidOp check (ring closure and size are still checked): for general feature reading. */
+    PolygonAssembly withoutValidation() {
+        validate = false;
+        return this;
     }
 
     GeometryFileException error(Problem p, Coordinate at, String detail) {
@@ -109,6 +116,7 @@ final class PolygonAssembly {
 
     /** Validates a polygonal geometry (IsValidOp), or repairs it when asked. */
     Geometry validate(Geometry g) throws GeometryFileException {
+        if (!validate) return g;
         IsValidOp op = new IsValidOp(g);
         if (op.isValid()) return g;
         TopologyValidationError e = op.getValidationError();

@@ -106,6 +106,11 @@ class StationWindCsvTest {
         StationWindSeries s = StationWindCsv.read(noUnit, StationWindCsv.Options.DEFAULT.withSpeedUnit(SpeedUnit.KNOT));
         assertEquals(5 * KN, s.eastwardMs(0), TOL); // west wind blows eastward
 
+        // units known to the netCDF unit table are accepted too: 100 cm/s = 1 m/s
+        StationWindSeries cm = StationWindCsv.read(write("cm.csv", "time,u [cm/s],v [cm/s]\n2026-01-01T00:00Z,100,-50\n"));
+        assertEquals(1.0, cm.eastwardMs(0), TOL);
+        assertEquals(-0.5, cm.northwardMs(0), TOL);
+
         CsvFormatException missing = assertThrows(CsvFormatException.class, () -> StationWindCsv.read(write("m.csv",
                 "time,pressure [hPa]\n2026-01-01T00:00Z,1013\n")));
         assertEquals(Problem.MISSING_COLUMN, missing.problem());

@@ -181,4 +181,26 @@ class PolygonFilesTest {
                 () -> PolygonFiles.readOne(f, PolygonFiles.Options.DEFAULT, null));
         assertTrue(several.getMessage().contains("[Outer Bay, Twin Isles]"), several.getMessage());
     }
+
+    @Test
+    void pointShapefileAndAmbiguousGeoPackageLayersAreRefused() throws Exception {
+        Path pts = write("sites.geojson", "{\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\","
+                + "\"properties\":{\"name\":\"S1\"},\"geometry\":{\"type\":\"Point\",\"coordinates\":[1,2]}}]}");
+        Path shp = dir.resolve("sites.shp");
+        assertEquals(0, Ogr.run("ogr2ogr", "-f", "ESRI Shapefile", shp.toString(), pts.toString()).exit());
+        GeometryFileException e = assertThrows(GeometryFileException.class, () -> PolygonFiles.read(shp));
+        assertEquals(Problem.NOT_POLYGON, e.problem());
+        assertTrue(e.getMessage().contains("Point"), e.getMessage());
+
+        Path gpkg = dir.resolve("two.gpkg");
+        GeoPackageFiles.write(gpkg, List.of(Fixtures.stations(), Fixtures.zones(),
+                new FeatureLayer("more_zones", Fixtures.zones().features())));
+        GeometryFileException amb = assertThrows(GeometryFileException.class, () -> PolygonFiles.read(gpkg));
+        assertEquals(Problem.NO_POLYGONS, amb.problem());
+        assertTrue(amb.getMessage().contains("[zones, more_zones]"), amb.getMessage());
+        GeometryFileException points = assertThrows(GeometryFileException.class,
+                () -> PolygonFiles.read(gpkg, PolygonFiles.Options.DEFAULT.withLayer("stations")));
+        assertEquals(Problem.NOT_POLYGON, points.problem());
+        assertEquals(2, PolygonFiles.read(gpkg, PolygonFiles.Options.DEFAULT.withLayer("more_zones")).size());
+    }
 }

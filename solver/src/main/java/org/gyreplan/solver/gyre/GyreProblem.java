@@ -34,14 +34,14 @@ public record GyreProblem(LonLatGrid grid, ScalarField curl, VectorField stress,
     /**
      * Numerical options.
      *
-     * @param tolerance     relative residual of the linear solve (default 1e-10)
+     * @param tolerance     relative residual of the linear solve (default 1e-9; the true residual must reach 10·tolerance)
      * @param maxIterations iteration limit of the Krylov solver (default 200)
      * @param threads       worker threads (results do not depend on it); default: available processors
      * @param maxIslands    refuse (with a clear message) basins with more islands than this (default 32)
      */
     public record Options(double tolerance, int maxIterations, int threads, int maxIslands) {
         public static Options defaults() {
-            return new Options(1e-10, 200, Math.max(1, Runtime.getRuntime().availableProcessors()), 32);
+            return new Options(1e-9, 200, Math.max(1, Runtime.getRuntime().availableProcessors()), 32);
         }
         public Options {
             if (!(tolerance > 0 && tolerance < 1)) throw new IllegalArgumentException("tolerance must lie in (0, 1), got " + tolerance);

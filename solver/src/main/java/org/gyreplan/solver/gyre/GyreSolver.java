@@ -112,7 +112,7 @@ public final class GyreSolver {
                 Krylov.Result kr = Krylov.bicgstab(A, mg, b, x, p.options().tolerance(), p.options().maxIterations(),
                         par, listener, cancel, stage);
                 if (!kr.converged()) throw new GyreException(GyreException.Reason.NOT_CONVERGED, String.format(
-                        "the linear solver stopped after %d iterations at relative residual %.2e (target %.1e)",
+                        "the linear solver stopped after %d iterations at relative residual %.2e (target %.1e, accepted up to 10×)",
                         kr.iterations(), kr.relativeResidual(), p.options().tolerance()));
                 iters[s] = kr.iterations();
                 res[s] = kr.relativeResidual();

@@ -60,6 +60,42 @@ public final class Geodesy {
         return pts;
     }
 
+    /**
+     * Points along the great circle (on the sphere, by spherical linear interpolation of unit vectors) from 1 to 2,
+     * both ends included, at most {@code maxStepM} apart (measured on the mean sphere): {@code [n][2]} = {lonDeg
+     * (unrolled from lon1), latDeg}. A fast stand-in for {@link #densify} in crossing tests: over a leg of length L
+     * the great circle and the WGS 84 geodesic between the same ends separate by roughly f·L²/(8R)·(a few) — tens of
+     * metres for L = 300 km — far below typical obstacle margins.
+     */
+    public static double[][] greatCirclePoints(double lon1Deg, double lat1Deg, double lon2Deg, double lat2Deg, double maxStepM) {
+        double p1 = Math.toRadians(lat1Deg), l1 = Math.toRadians(lon1Deg), p2 = Math.toRadians(lat2Deg), l2 = Math.toRadians(lon2Deg);
+        double x1 = Math.cos(p1) * Math.cos(l1), y1 = Math.cos(p1) * Math.sin(l1), z1 = Math.sin(p1);
+        double x2 = Math.cos(p2) * Math.cos(l2), y2 = Math.cos(p2) * Math.sin(l2), z2 = Math.sin(p2);
+        double cx = y1 * z2 - z1 * y2, cy = z1 * x2 - x1 * z2, cz = x1 * y2 - y1 * x2;
+        double omega = Math.atan2(Math.sqrt(cx * cx + cy * cy + cz * cz), x1 * x2 + y1 * y2 + z1 * z2);
+        int n = Math.max(1, (int) Math.ceil(omega * MEAN_RADIUS_M / maxStepM));
+        double[][] pts = new double[n + 1][];
+        pts[0] = new double[] {lon1Deg, lat1Deg};
+        double so = Math.sin(omega);
+        double prevLon = lon1Deg;
+        for (int q = 1; q < n; q++) {
+            double t = (double) q / n;
+            double a = so > 1e-15 ? Math.sin((1 - t) * omega) / so : 1 - t, b = so > 1e-15 ? Math.sin(t * omega) / so : t;
+            double x = a * x1 + b * x2, y = a * y1 + b * y2, z = a * z1 + b * z2;
+            double lat = Math.toDegrees(Math.atan2(z, Math.hypot(x, y)));
+            double lon = Math.toDegrees(Math.atan2(y, x));
+            while (lon - prevLon > 180) lon -= 360;
+            while (lon - prevLon < -180) lon += 360;
+            pts[q] = new double[] {lon, lat};
+            prevLon = lon;
+        }
+        double lonEnd = lon2Deg;
+        while (lonEnd - prevLon > 180) lonEnd -= 360;
+        while (lonEnd - prevLon < -180) lonEnd += 360;
+        pts[n] = new double[] {lonEnd, lat2Deg};
+        return pts;
+    }
+
     /** Great-circle distance on a sphere of radius {@link #MEAN_RADIUS_M} (haversine), m. Within ~0.5 % of WGS 84. */
     public static double sphereDistanceM(double lon1Deg, double lat1Deg, double lon2Deg, double lat2Deg) {
         double p1 = Math.toRadians(lat1Deg), p2 = Math.toRadians(lat2Deg);

@@ -2,6 +2,8 @@ package org.gyreplan.solver.upwelling;
 
 import org.gyreplan.solver.PhysicalConstants;
 import org.gyreplan.solver.coast.CoastPoint;
+import org.gyreplan.solver.ekman.EkmanTransport;
+import org.gyreplan.solver.ekman.EquatorialCutoff;
 import org.gyreplan.solver.grid.TimeAxis;
 import org.gyreplan.solver.grid.VectorField;
 import org.gyreplan.solver.progress.CancelToken;
@@ -35,40 +37,36 @@ import java.util.function.IntFunction;
  * follows from the sign of f, with no hemisphere switch. An equatorward alongshore wind on an eastern-boundary
  * coast gives UI &gt; 0 in both hemispheres.
  * <p><b>Validity</b>: steady Ekman balance, so the index is a daily or longer average; undefined near the equator:
- * within the cut-off (default {@value #DEFAULT_EQUATORIAL_CUTOFF_DEG}°) it is NaN and flagged
+ * within the cut-off ({@link EquatorialCutoff}, default 5°) it is NaN and flagged
  * {@link IndexFlag#EQUATORIAL_CUTOFF}. The latitude used for f is the coast point's, not the wind cell's.
  * <p><b>Sampling</b> of stress fields: {@link StressSampling#NEAREST_OCEAN} (default: the nearest cell with finite
  * stress) or {@link StressSampling#BILINEAR}; the distance from the point to the cell used is reported.
+ * <p>The transport itself is {@link EkmanTransport#of}; this class adds the coast geometry and the sampling.
  * <p><b>Source</b>: Ekman transport, Ekman (1905) as written by Stewart, Introduction to Physical Oceanography,
  * eq. 9.26; the index as offshore Ekman transport per 100 m of coastline, Bakun (1973), NOAA Tech. Rep. NMFS
  * SSRF-671 (definition and unit from memory).
  */
 public final class CoastalUpwellingIndex {
-    /** Default equatorial cut-off, degrees of latitude (|φ| below it: undefined). */
-    public static final double DEFAULT_EQUATORIAL_CUTOFF_DEG = 5.0;
     /** Length of coastline the index refers to, m. */
     public static final double COAST_LENGTH_M = 100.0;
     private static final Set<String> STRESS_UNITS = Set.of("Pa", "N m-2", "N/m2", "N m**-2", "N/m^2", "N.m-2", "N m^-2");
 
     private final PhysicalConstants constants;
-    private final double equatorialCutoffDeg;
+    private final EquatorialCutoff cutoff;
     private final StressSampling sampling;
     private final double maxDataDistanceKm;
 
     /**
      * @param constants           ρ₀ and Ω are used
-     * @param equatorialCutoffDeg |φ| below this (degrees) gives NaN, flagged
+     * @param cutoff              equatorial cut-off: inside it the index is NaN, flagged
      * @param sampling            how stress fields are sampled at points
      * @param maxDataDistanceKm   points farther than this from the cell used get NaN, flagged
      *                            {@link IndexFlag#TOO_FAR_FROM_DATA} (km; infinity = no limit)
      */
-    public CoastalUpwellingIndex(PhysicalConstants constants, double equatorialCutoffDeg, StressSampling sampling,
+    public CoastalUpwellingIndex(PhysicalConstants constants, EquatorialCutoff cutoff, StressSampling sampling,
                                  double maxDataDistanceKm) {
         this.constants = Objects.requireNonNull(constants, "constants");
-        if (!(equatorialCutoffDeg >= 0) || equatorialCutoffDeg >= 90) {
-            throw new IllegalArgumentException("equatorial cut-off must be in [0°, 90°), got " + equatorialCutoffDeg);
-        }
-        this.equatorialCutoffDeg = equatorialCutoffDeg;
+        this.cutoff = Objects.requireNonNull(cutoff, "cutoff");
         this.sampling = Objects.requireNonNull(sampling, "sampling");
         if (!(maxDataDistanceKm > 0)) {
             throw new IllegalArgumentException("maximum data distance must be positive km, got " + maxDataDistanceKm);
@@ -78,30 +76,30 @@ public final class CoastalUpwellingIndex {
 
     /** Default constants, 5° cut-off, nearest-ocean sampling, no distance limit. */
     public static CoastalUpwellingIndex defaults() {
-        return new CoastalUpwellingIndex(PhysicalConstants.DEFAULT, DEFAULT_EQUATORIAL_CUTOFF_DEG,
+        return new CoastalUpwellingIndex(PhysicalConstants.DEFAULT, EquatorialCutoff.DEFAULT,
                 StressSampling.NEAREST_OCEAN, Double.POSITIVE_INFINITY);
     }
 
     public CoastalUpwellingIndex withConstants(PhysicalConstants c) {
-        return new CoastalUpwellingIndex(c, equatorialCutoffDeg, sampling, maxDataDistanceKm);
+        return new CoastalUpwellingIndex(c, cutoff, sampling, maxDataDistanceKm);
     }
-    public CoastalUpwellingIndex withEquatorialCutoffDeg(double deg) {
-        return new CoastalUpwellingIndex(constants, deg, sampling, maxDataDistanceKm);
+    public CoastalUpwellingIndex withCutoff(EquatorialCutoff c) {
+        return new CoastalUpwellingIndex(constants, c, sampling, maxDataDistanceKm);
     }
     public CoastalUpwellingIndex withSampling(StressSampling s) {
-        return new CoastalUpwellingIndex(constants, equatorialCutoffDeg, s, maxDataDistanceKm);
+        return new CoastalUpwellingIndex(constants, cutoff, s, maxDataDistanceKm);
     }
     public CoastalUpwellingIndex withMaxDataDistanceKm(double km) {
-        return new CoastalUpwellingIndex(constants, equatorialCutoffDeg, sampling, km);
+        return new CoastalUpwellingIndex(constants, cutoff, sampling, km);
     }
 
     public PhysicalConstants constants() { return constants; }
-    public double equatorialCutoffDeg() { return equatorialCutoffDeg; }
+    public EquatorialCutoff cutoff() { return cutoff; }
     public StressSampling sampling() { return sampling; }
     public double maxDataDistanceKm() { return maxDataDistanceKm; }
 
     /** Whether the latitude lies within the equatorial cut-off. */
-    public boolean withinCutoff(double latDeg) { return Math.abs(latDeg) < equatorialCutoffDeg; }
+    public boolean withinCutoff(double latDeg) { return cutoff.applies(latDeg); }
 
     /**
      * The index from a stress vector at a latitude and offshore bearing, m³ s⁻¹ per 100 m; NaN within the cut-off.
@@ -131,9 +129,8 @@ public final class CoastalUpwellingIndex {
         if (distanceKm > maxDataDistanceKm) {
             return new PointIndex(p, Double.NaN, tx, ty, Double.NaN, Double.NaN, distanceKm, IndexFlag.TOO_FAR_FROM_DATA);
         }
-        double f = constants.coriolis(p.latDeg());
-        double qx = ty / (constants.rho0() * f);
-        double qy = -tx / (constants.rho0() * f);
+        EkmanTransport q = EkmanTransport.of(tx, ty, p.latDeg(), constants, cutoff);
+        double qx = q.eastward(), qy = q.northward();
         double ui = COAST_LENGTH_M * (qx * p.offshoreEastward() + qy * p.offshoreNorthward());
         return new PointIndex(p, ui, tx, ty, qx, qy, distanceKm, IndexFlag.OK);
     }

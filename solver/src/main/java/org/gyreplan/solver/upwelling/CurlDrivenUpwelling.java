@@ -5,6 +5,9 @@ import net.sf.geographiclib.GeodesicData;
 import net.sf.geographiclib.GeodesicMask;
 import org.gyreplan.solver.PhysicalConstants;
 import org.gyreplan.solver.coast.CoastPoint;
+import org.gyreplan.solver.ekman.EkmanPumping;
+import org.gyreplan.solver.ekman.EquatorialCutoff;
+import org.gyreplan.solver.grid.VectorField;
 import org.gyreplan.solver.grid.ScalarField;
 
 import java.util.ArrayList;
@@ -136,5 +139,14 @@ public final class CurlDrivenUpwelling {
         List<Result> out = new ArrayList<>(coastal.size());
         for (PointIndex pi : coastal) out.add(at(pi.point(), pumpingMPerS, pi.indexM3PerSPer100m()));
         return out;
+    }
+
+    /**
+     * Results for a list of coastal index values from the stress field itself: the pumping is
+     * {@link EkmanPumping#field} (w_E = curl(τ/f)/ρ₀, positive upward) on the stress grid.
+     */
+    public List<Result> fromStress(List<PointIndex> coastal, VectorField stressPa, PhysicalConstants constants,
+                                   EquatorialCutoff cutoff) {
+        return atPoints(coastal, EkmanPumping.field(stressPa, constants, cutoff).pumping());
     }
 }

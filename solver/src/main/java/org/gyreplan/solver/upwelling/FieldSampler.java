@@ -39,21 +39,23 @@ final class FieldSampler {
     private void sortCandidates() {
         int n = grid.size();
         double[] d = new double[n];
-        Integer[] idx = new Integer[n];
+        long[] keys = new long[n];
         for (int j = 0; j < grid.ny(); j++) {
             for (int i = 0; i < grid.nx(); i++) {
                 int k = grid.index(i, j);
-                idx[k] = k;
                 d[k] = greatCircleKm(lonDeg, latDeg, grid.lonDeg(i), grid.latDeg(j), grid.radius());
+                // order by distance (float bits of a non-negative float sort like the value), ties by cell index
+                keys[k] = ((long) Float.floatToIntBits((float) d[k]) << 32) | k;
             }
         }
-        Arrays.sort(idx, (p, q) -> {
-            int c = Double.compare(d[p], d[q]);
-            return c != 0 ? c : Integer.compare(p, q);
-        });
+        Arrays.sort(keys);
         nearest = new int[n];
         nearestKm = new double[n];
-        for (int k = 0; k < n; k++) { nearest[k] = idx[k]; nearestKm[k] = d[idx[k]]; }
+        for (int r = 0; r < n; r++) {
+            int k = (int) (keys[r] & 0xffffffffL);
+            nearest[r] = k;
+            nearestKm[r] = d[k];
+        }
     }
 
     /** Samples the pair (a, b) (e.g. the two stress components); a cell counts only if both are finite. */

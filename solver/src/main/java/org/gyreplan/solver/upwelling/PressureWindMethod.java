@@ -12,7 +12,7 @@ package org.gyreplan.solver.upwelling;
  * R(±θ) turns counter-clockwise (+θ) in the northern hemisphere and clockwise (−θ) in the southern one, i.e. always
  * toward low pressure.
  *
- * @param reduction              a, ratio of surface to geostrophic wind speed (dimensionless, (0, 2])
+ * @param reduction              a, ratio of surface to geostrophic wind speed (dimensionless, (0, 1.5])
  * @param turningDeg             θ, turning of the surface wind toward low pressure, degrees in [0, 90)
  * @param dragCoefficient        C_D (dimensionless), constant
  * @param gradientWindCorrection whether to correct the geostrophic speed for isobar curvature (gradient wind)
@@ -34,12 +34,7 @@ public record PressureWindMethod(double reduction, double turningDeg, double dra
     public static final PressureWindMethod CLASSIC_MONTHLY_MEAN = new PressureWindMethod(0.7, 15.0, 0.0026, false);
 
     public PressureWindMethod {
-        if (!(reduction > 0 && reduction <= 2)) {
-            throw new IllegalArgumentException("wind reduction factor must be in (0, 2], got " + reduction);
-        }
-        if (!(turningDeg >= 0 && turningDeg < 90)) {
-            throw new IllegalArgumentException("turning angle must be in [0°, 90°), got " + turningDeg);
-        }
+        new org.gyreplan.solver.atmos.SurfaceWindFromGeostrophic(reduction, turningDeg);   // validates both
         if (!(dragCoefficient > 0 && dragCoefficient < 0.01)) {
             throw new IllegalArgumentException("drag coefficient must be in (0, 0.01), got " + dragCoefficient);
         }

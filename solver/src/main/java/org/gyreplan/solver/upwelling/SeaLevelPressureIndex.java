@@ -1,6 +1,14 @@
 package org.gyreplan.solver.upwelling;
 
 import org.gyreplan.solver.PhysicalConstants;
+import org.gyreplan.solver.atmos.GeostrophicWind;
+import org.gyreplan.solver.atmos.GradientWind;
+import org.gyreplan.solver.atmos.SurfaceWindFromGeostrophic;
+import org.gyreplan.solver.operators.SphericalOperators;
+import org.gyreplan.solver.stress.ConstantDrag;
+import org.gyreplan.solver.stress.StressVector;
+import org.gyreplan.solver.stress.WindStress;
+import org.gyreplan.solver.stress.WindVector;
 import org.gyreplan.solver.coast.CoastPoint;
 import org.gyreplan.solver.grid.LonLatGrid;
 import org.gyreplan.solver.grid.ScalarField;
@@ -41,9 +49,13 @@ import java.util.function.IntFunction;
  * The gradient-wind correction has no anticyclonic solution when V_g &gt; |f||r|/4 (flagged
  * {@link IndexFlag#GRADIENT_WIND_INVALID}). The constant drag and the fixed turning are an empirical
  * approximation; C_D = 0.0026 is meant for monthly-mean pressure, 0.0013 for synoptic (6-hourly) fields.
- * <p><b>Field form</b>: ∇p by centred differences on the grid (one-sided next to missing values, periodic
- * in longitude on global grids), the stress field is then sampled at the points as configured in the
- * {@link CoastalUpwellingIndex}.
+ * <p>The steps are those of {@link GeostrophicWind}, {@link GradientWind}, {@link SurfaceWindFromGeostrophic} and
+ * {@link WindStress} with a {@link ConstantDrag}; this class chains them with the coast geometry.
+ * <p><b>Field form</b>: ∇p from {@link SphericalOperators#gradient} (centred, one-sided next to missing values,
+ * periodic in longitude on global grids); for the curvature correction the second derivatives are the gradient of
+ * the gradient and the isobar curvature is κ = (p_xx p_y² − 2 p_xy p_x p_y + p_yy p_x²)/|∇p|³, r = 1/κ (metric
+ * terms of order 1/R neglected against 1/r); where κ is undefined the isobars are taken as straight. The stress
+ * field is then sampled at the points as configured in the {@link CoastalUpwellingIndex}.
  * <p><b>Source</b>: Bakun (1973), "Coastal upwelling indices, west coast of North America, 1946–71", NOAA Tech.
  * Rep. NMFS SSRF-671 (method and parameters from memory); geostrophic and gradient wind: Holton, An Introduction
  * to Dynamic Meteorology, ch. 3.
@@ -111,22 +123,36 @@ public final class SeaLevelPressureIndex {
     private double[] surfaceWind(double px, double py, double latDeg, double r) {
         if (index.withinCutoff(latDeg) || !Double.isFinite(px) || !Double.isFinite(py)) return null;
         PhysicalConstants c = constants();
-        double f = c.coriolis(latDeg);
-        double ug = -py / (c.rhoAir() * f), vg = px / (c.rhoAir() * f);
-        if (method.gradientWindCorrection()) {
+        WindVector g = GeostrophicWind.of(px, py, latDeg, c, index.cutoff());
+        double ug = g.eastward(), vg = g.northward();
+        if (method.gradientWindCorrection() && Double.isFinite(r) && r != 0) {
             double vgs = Math.hypot(ug, vg);
-            double v = PressureWindOps.gradientSpeed(vgs, Math.abs(f), r);
-            if (Double.isNaN(v)) return null;
-            if (vgs > 0) { ug *= v / vgs; vg *= v / vgs; }
+            GradientWind gw = r > 0 ? GradientWind.aroundLow(vgs, r, latDeg, c, index.cutoff())
+                    : GradientWind.aroundHigh(vgs, -r, latDeg, c, index.cutoff());
+            if (!gw.hasSolution()) return null;
+            if (vgs > 0) { ug *= gw.speed() / vgs; vg *= gw.speed() / vgs; }
         }
-        double th = f > 0 ? method.turningDeg() : -method.turningDeg();
-        double cs = PressureWindOps.cosDeg(th), sn = PressureWindOps.sinDeg(th), a = method.reduction();
-        return new double[] {ug, vg, a * (ug * cs - vg * sn), a * (ug * sn + vg * cs)};
+        WindVector w = new SurfaceWindFromGeostrophic(method.reduction(), method.turningDeg()).apply(ug, vg, latDeg);
+        return new double[] {ug, vg, w.eastward(), w.northward()};
     }
 
     private double[] stress(double u, double v) {
-        double k = constants().rhoAir() * method.dragCoefficient() * Math.hypot(u, v);
-        return new double[] {k * u, k * v};
+        StressVector t = WindStress.of(u, v, new ConstantDrag(method.dragCoefficient()), constants().rhoAir());
+        return new double[] {t.eastwardPa(), t.northwardPa()};
+    }
+
+    /**
+     * Signed radius of curvature of the isobar, m: positive when the isobar curves around lower pressure
+     * (cyclonic), negative around higher pressure, infinite for straight isobars or when undefined.
+     * <pre>  κ = (p_xx p_y² − 2 p_xy p_x p_y + p_yy p_x²) / |∇p|³,   r = 1/κ</pre>
+     */
+    static double curvatureRadius(double px, double py, double pxx, double pyy, double pxy) {
+        double g2 = px * px + py * py;
+        if (!(g2 > 0) || !Double.isFinite(pxx) || !Double.isFinite(pyy) || !Double.isFinite(pxy)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double k = (pxx * py * py - 2 * pxy * px * py + pyy * px * px) / Math.pow(g2, 1.5);
+        return k == 0 ? Double.POSITIVE_INFINITY : 1.0 / k;
     }
 
     private static void checkPressure(ScalarField slp) {
@@ -150,13 +176,22 @@ public final class SeaLevelPressureIndex {
         checkPressure(slp);
         LonLatGrid g = slp.grid();
         double[] p = slp.values();
-        double[] ue = new double[g.size()], vn = new double[g.size()];
+        int n = g.size();
+        double[] px = new double[n], py = new double[n];
+        SphericalOperators.gradient(g, p, px, py);
+        double[] pxx = null, pxy = null, pyx = null, pyy = null;
+        if (method.gradientWindCorrection()) {
+            pxx = new double[n]; pxy = new double[n]; pyx = new double[n]; pyy = new double[n];
+            SphericalOperators.gradient(g, px, pxx, pxy);
+            SphericalOperators.gradient(g, py, pyx, pyy);
+        }
+        double[] ue = new double[n], vn = new double[n];
         for (int j = 0; j < g.ny(); j++) {
             for (int i = 0; i < g.nx(); i++) {
                 int k = g.index(i, j);
-                double[] d = PressureWindOps.derivatives(p, g, i, j);
-                double r = PressureWindOps.curvatureRadius(d[0], d[1], d[2], d[3], d[4]);
-                double[] w = Double.isFinite(p[k]) ? surfaceWind(d[0], d[1], g.latDeg(j), r) : null;
+                double r = pxx == null ? Double.POSITIVE_INFINITY
+                        : curvatureRadius(px[k], py[k], pxx[k], pyy[k], 0.5 * (pxy[k] + pyx[k]));
+                double[] w = Double.isFinite(p[k]) ? surfaceWind(px[k], py[k], g.latDeg(j), r) : null;
                 if (w == null) { ue[k] = Double.NaN; vn[k] = Double.NaN; continue; }
                 if (asStress) {
                     double[] t = stress(w[2], w[3]);

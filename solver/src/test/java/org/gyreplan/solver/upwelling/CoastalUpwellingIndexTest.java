@@ -98,7 +98,7 @@ class CoastalUpwellingIndexTest {
         assertTrue(Double.isNaN(UI.fromStress(0, -0.1, -4.999, 270)));
         // at the cut-off itself the index is defined and finite
         assertTrue(Double.isFinite(UI.fromStress(0, -0.1, 5.0, 270)));
-        assertTrue(Double.isFinite(UI.withEquatorialCutoffDeg(2).fromStress(0, -0.1, 3.0, 270)));
+        assertTrue(Double.isFinite(UI.withCutoff(org.gyreplan.solver.ekman.EquatorialCutoff.ofDegrees(2)).fromStress(0, -0.1, 3.0, 270)));
     }
 
     private static VectorField field(LonLatGrid g, double tx, double ty, boolean[] land) {

@@ -126,8 +126,8 @@ class SeaLevelPressureIndexTest {
     void curvatureOfCircularIsobarsIsTheirRadius() {
         // p = a·r²/2 around a centre (a low): isobars are circles of radius r, cyclonic (positive).
         double a = 1e-9, x = 3e5, y = -4e5;
-        double r = PressureWindOps.curvatureRadius(a * x, a * y, a, a, 0);
+        double r = SeaLevelPressureIndex.curvatureRadius(a * x, a * y, a, a, 0);
         assertEquals(5e5, r, 1e-6);
-        assertEquals(-5e5, PressureWindOps.curvatureRadius(-a * x, -a * y, -a, -a, 0), 1e-6);
+        assertEquals(-5e5, SeaLevelPressureIndex.curvatureRadius(-a * x, -a * y, -a, -a, 0), 1e-6);
     }
 }

@@ -40,7 +40,7 @@ public record SiteDossier(ChosenSite site, DeploymentWindows weather, double min
         }
         for (int m = 1; m <= 12; m++) {
             if (weather.samples()[m - 1] == 0) {
-                cautions.add("No wind data for " + Month.of(m).getDisplayName(TextStyle.FULL, Locale.ROOT) + "; its weather is unknown.");
+                cautions.add("No wind data for " + Month.of(m).getDisplayName(TextStyle.FULL, Locale.ENGLISH) + "; its weather is unknown.");
             }
         }
         if (type == MooringType.SLACK_SURFACE && c.depthM() > 6000) {

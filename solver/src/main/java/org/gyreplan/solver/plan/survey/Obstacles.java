@@ -12,28 +12,30 @@ import org.locationtech.jts.operation.union.UnaryUnionOp;
 import org.locationtech.jts.simplify.DouglasPeuckerSimplifier;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.PriorityQueue;
 
 /**
  * Land and exclusion polygons a ship's track must not cross, and the shortest way around them.
  *
  * <p>Method and approximations:
  * <ul>
- *   <li>A leg is the WGS 84 geodesic between its ends, densified to points at most {@code checkStepKm} apart; the
- *       polyline through those points (straight in lon/lat between them) is tested against the obstacles with JTS.
+ *   <li>A leg is the WGS 84 geodesic between its ends. For the crossing test it is stood in for by the great circle
+ *       through the same ends (tens of metres apart for legs of a few hundred km), densified to points at most
+ *       {@code checkStepKm} apart; the polyline through those points (straight in lon/lat between them) is tested
+ *       against the obstacles with JTS.
  *       Between check points the true geodesic deviates from the chord by far less than a kilometre for steps of a
  *       few km, so features much smaller than the step can be missed.</li>
  *   <li>When a leg is blocked, it is replaced by the shortest path in a visibility graph whose nodes are the two
- *       ends and the vertices of the obstacles buffered by {@code marginKm} (buffer in degrees of latitude,
- *       i.e. the clearance east–west grows as 1/cos φ, which errs on the safe side; buffered rings simplified with a
- *       tolerance of a quarter margin, so every node stays outside the original polygons). Edges are geodesics that
+ *       ends and the vertices of the obstacles buffered by {@code marginKm} (a buffer in degrees, widened by
+ *       1/cos φ_max of the poleward-most obstacle latitude so that the east–west clearance is at least the margin;
+ *       north–south it is then larger, which errs on the safe side; buffered rings simplified with a tolerance of a
+ *       quarter of the buffer, and vertices inside any original polygon dropped). Edges are geodesics that
  *       pass the same crossing test against the original polygons; weights are their WGS 84 lengths. The search is
- *       A* (Dijkstra with the spherical distance × 0.99 as an admissible lower bound, since WGS 84 and sphere
- *       distances differ by well under 1 %).</li>
+ *       Dijkstra on the dense graph; vertex–vertex visibility is computed once per
+ *       {@code Obstacles} and point–vertex visibility once per point, so routing many stops costs
+ *       O(V² + P·V) crossing tests (V vertices, P places). Simplify large coastlines before use.</li>
  *   <li>The result is the shortest path through buffered vertices, not the exact shortest path around curved
  *       coastlines: it is longer by the corner cut-offs, and it keeps at least roughly the margin at the turning
  *       points only.</li>
@@ -47,7 +49,8 @@ public final class Obstacles {
     private final PreparedGeometry prepared;
     private final double checkStepM;
     private final double[][] nodes;   // lon, lat of buffered vertices
-    private final Map<Long, Boolean> visibleCache = new HashMap<>();
+    private final Map<Long, double[]> endpointCache = new HashMap<>();
+    private double[][] nodeDist;
 
     private Obstacles(Geometry union, double marginKm, double checkStepKm) {
         this.union = union;
@@ -56,7 +59,11 @@ public final class Obstacles {
         if (union == null) {
             nodes = new double[0][];
         } else {
-            double marginDeg = marginKm / 111.0;
+            // a buffer of r degrees is r·111 km north–south but only r·111·cos φ km east–west: widen it by the
+            // poleward-most latitude of the obstacles so the east–west clearance is at least the margin everywhere
+            double maxAbsLat = Math.min(80.0, Math.max(Math.abs(union.getEnvelopeInternal().getMinY()),
+                    Math.abs(union.getEnvelopeInternal().getMaxY())));
+            double marginDeg = marginKm / 111.0 / Math.cos(Math.toRadians(maxAbsLat));
             Geometry buf = union.buffer(marginDeg, 4);
             buf = DouglasPeuckerSimplifier.simplify(buf, marginDeg / 4);
             List<double[]> pts = new ArrayList<>();
@@ -97,7 +104,9 @@ public final class Obstacles {
     /** Whether the geodesic from 1 to 2 is free of obstacles. */
     public boolean clear(double lon1, double lat1, double lon2, double lat2) {
         if (prepared == null) return true;
-        return !prepared.intersects(line(Geodesy.densify(lon1, lat1, lon2, lat2, checkStepM)));
+        LineString l = line(Geodesy.greatCirclePoints(lon1, lat1, lon2, lat2, checkStepM));
+        if (!l.getEnvelopeInternal().intersects(union.getEnvelopeInternal())) return true;
+        return !prepared.intersects(l);
     }
 
     /** A polyline {@code [n][2]} (lon, lat) of the given points as JTS geometry. */
@@ -118,56 +127,68 @@ public final class Obstacles {
         if (contains(lon2, lat2)) throw new IllegalArgumentException("position (" + lon2 + ", " + lat2 + ") is on land or inside an exclusion zone");
         if (clear(lon1, lat1, lon2, lat2)) return List.of(new double[] {lon1, lat1}, new double[] {lon2, lat2});
         int v = nodes.length, start = v, goal = v + 1;
-        double[][] all = Arrays.copyOf(nodes, v + 2);
-        all[start] = new double[] {lon1, lat1};
-        all[goal] = new double[] {lon2, lat2};
+        double[][] nd = nodeDistances();
+        double[] fromStart = endpointDistances(lon1, lat1), toGoal = endpointDistances(lon2, lat2);
+        // Dijkstra on the dense graph (V + 2 nodes); start has edges fromStart, goal has edges toGoal
         double[] g = new double[v + 2];
         int[] prev = new int[v + 2];
-        Arrays.fill(g, Double.POSITIVE_INFINITY);
-        Arrays.fill(prev, -1);
         boolean[] done = new boolean[v + 2];
+        java.util.Arrays.fill(g, Double.POSITIVE_INFINITY);
+        java.util.Arrays.fill(prev, -1);
         g[start] = 0;
-        PriorityQueue<double[]> open = new PriorityQueue<>((a, b) -> a[0] != b[0] ? Double.compare(a[0], b[0]) : Double.compare(a[1], b[1]));
-        open.add(new double[] {h(all[start], all[goal]), start});
-        while (!open.isEmpty()) {
-            int u = (int) open.poll()[1];
-            if (done[u]) continue;
+        for (int it = 0; it < v + 2; it++) {
+            int u = -1;
+            for (int w = 0; w < v + 2; w++) if (!done[w] && (u < 0 || g[w] < g[u])) u = w;
+            if (u < 0 || g[u] == Double.POSITIVE_INFINITY) break;
             done[u] = true;
             if (u == goal) break;
-            for (int w = 0; w < v + 2; w++) {
-                if (w == u || done[w] || w == start) continue;
-                double lower = g[u] + Geodesy.sphereDistanceM(all[u][0], all[u][1], all[w][0], all[w][1]) * 0.99;
-                if (lower >= g[w]) continue;
-                if (!visible(u, w, all, v)) continue;
-                double d = g[u] + Geodesy.distanceM(all[u][0], all[u][1], all[w][0], all[w][1]);
-                if (d < g[w]) {
-                    g[w] = d;
-                    prev[w] = u;
-                    open.add(new double[] {d + h(all[w], all[goal]), w});
-                }
+            for (int w = 0; w < v; w++) {
+                if (done[w]) continue;
+                double e = u == start ? fromStart[w] : nd[u][w];
+                if (g[u] + e < g[w]) { g[w] = g[u] + e; prev[w] = u; }
             }
+            if (u != start && g[u] + toGoal[u] < g[goal]) { g[goal] = g[u] + toGoal[u]; prev[goal] = u; }
         }
         if (prev[goal] < 0) {
             throw new IllegalArgumentException("no obstacle-free path from (" + lon1 + ", " + lat1 + ") to (" + lon2 + ", " + lat2 + ")");
         }
         List<double[]> out = new ArrayList<>();
-        for (int u = goal; u >= 0; u = prev[u]) out.add(0, all[u]);
+        for (int u = goal; u >= 0; u = prev[u]) {
+            out.add(0, u == start ? new double[] {lon1, lat1} : u == goal ? new double[] {lon2, lat2} : nodes[u]);
+        }
         return out;
     }
 
-    private static double h(double[] a, double[] b) { return Geodesy.sphereDistanceM(a[0], a[1], b[0], b[1]) * 0.99; }
-
-    private boolean visible(int u, int w, double[][] all, int v) {
-        if (u < v && w < v) {
-            long key = (long) Math.min(u, w) * 1_000_003L + Math.max(u, w);
-            Boolean c = visibleCache.get(key);
-            if (c == null) {
-                c = clear(all[u][0], all[u][1], all[w][0], all[w][1]);
-                visibleCache.put(key, c);
+    /** Geodesic lengths between mutually visible vertices (∞ if blocked), computed once. */
+    private synchronized double[][] nodeDistances() {
+        if (nodeDist == null) {
+            int v = nodes.length;
+            double[][] d = new double[v][v];
+            for (int i = 0; i < v; i++) {
+                for (int j = i + 1; j < v; j++) {
+                    double e = clear(nodes[i][0], nodes[i][1], nodes[j][0], nodes[j][1])
+                            ? Geodesy.distanceM(nodes[i][0], nodes[i][1], nodes[j][0], nodes[j][1]) : Double.POSITIVE_INFINITY;
+                    d[i][j] = d[j][i] = e;
+                }
             }
-            return c;
+            nodeDist = d;
         }
-        return clear(all[u][0], all[u][1], all[w][0], all[w][1]);
+        return nodeDist;
+    }
+
+    /** Geodesic lengths from a point to every visible vertex (∞ if blocked), cached per point. */
+    private synchronized double[] endpointDistances(double lon, double lat) {
+        long key = Double.doubleToLongBits(lon) * 31 + Double.doubleToLongBits(lat);
+        double[] d = endpointCache.get(key);
+        if (d == null || d.length != nodes.length) {
+            d = new double[nodes.length];
+            for (int w = 0; w < nodes.length; w++) {
+                d[w] = clear(lon, lat, nodes[w][0], nodes[w][1])
+                        ? Geodesy.distanceM(lon, lat, nodes[w][0], nodes[w][1]) : Double.POSITIVE_INFINITY;
+            }
+            endpointCache.put(key, d);
+        }
+        return d;
     }
 
     /** Number of visibility-graph vertices (buffered obstacle vertices). */

@@ -42,7 +42,7 @@ public final class Transects {
      * @param land   land polygons where no station may be placed, or null
      * @param depth  depth model (m, positive down), or {@link DepthModel#UNKNOWN}
      */
-    public static List<Transect> design(List<CoastPoint> coast, TransectDesign design, Geometry zones, Geometry land,
+    public static List<Transect> design(List<ShorePoint> coast, TransectDesign design, Geometry zones, Geometry land,
                                         DepthModel depth) {
         Objects.requireNonNull(coast, "coast");
         Objects.requireNonNull(design, "design");
@@ -64,7 +64,7 @@ public final class Transects {
         }
         double[] s = new double[n];
         for (int p = 1; p < n; p++) {
-            CoastPoint a = coast.get(p - 1), b = coast.get(p);
+            ShorePoint a = coast.get(p - 1), b = coast.get(p);
             s[p] = s[p - 1] + Geodesy.distanceM(a.lonDeg(), a.latDeg(), b.lonDeg(), b.latDeg());
         }
         PreparedGeometry pz = zones == null || zones.isEmpty() ? null : PreparedGeometryFactory.prepare(zones);
@@ -76,7 +76,7 @@ public final class Transects {
             while (seg < n - 2 && s[seg + 1] < d) seg++;
             double len = s[seg + 1] - s[seg];
             double t = len > 0 ? Math.min(1, Math.max(0, (d - s[seg]) / len)) : 0;
-            CoastPoint a = coast.get(seg), b = coast.get(seg + 1);
+            ShorePoint a = coast.get(seg), b = coast.get(seg + 1);
             double lon = a.lonDeg() + t * unwrap(b.lonDeg() - a.lonDeg()), lat = a.latDeg() + t * (b.latDeg() - a.latDeg());
             double ex = (1 - t) * sx[seg] + t * sx[seg + 1], ny = (1 - t) * sy[seg] + t * sy[seg + 1];
             double bearing = Math.toDegrees(Math.atan2(ex, ny));

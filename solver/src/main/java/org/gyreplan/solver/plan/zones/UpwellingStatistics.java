@@ -108,6 +108,33 @@ public final class UpwellingStatistics {
         return add(time, flat);
     }
 
+    /**
+     * Adds a whole series for one cell (e.g. a coastal upwelling series at a coast cell), m s⁻¹. Does not change
+     * {@link #steps()}, which counts field time steps only.
+     */
+    public UpwellingStatistics addCellSeries(int cell, java.util.List<Instant> times, double[] values) {
+        Objects.requireNonNull(times, "times");
+        Objects.requireNonNull(values, "values");
+        if (cell < 0 || cell >= grid.size()) throw new IllegalArgumentException("cell index " + cell + " is outside the grid (size " + grid.size() + ")");
+        if (times.size() != values.length) {
+            throw new IllegalArgumentException("cell " + cell + " series: " + times.size() + " times but " + values.length + " values");
+        }
+        int n = grid.size();
+        for (int t = 0; t < values.length; t++) {
+            double w = values[t];
+            if (!Double.isFinite(w)) continue;
+            int off = (times.get(t).atOffset(ZoneOffset.UTC).getMonthValue() - 1) * n;
+            long c = ++count[cell];
+            double d = w - mean[cell];
+            mean[cell] += d / c;
+            m2[cell] += d * (w - mean[cell]);
+            if (w > upwellingCutMps) upCount[cell]++;
+            monthSum[off + cell] += w;
+            monthCount[off + cell]++;
+        }
+        return this;
+    }
+
     public LonLatGrid grid() { return grid; }
     /** Number of time steps added. */
     public int steps() { return steps; }
