@@ -189,6 +189,7 @@ public class MainWindow extends BorderPane {
         built.moorings().addMoveListener(p -> pointMoved("Mooring site", p));
         built.stations().addMoveListener(p -> pointMoved("Station", p));
         timeBar.setSteps(s.stepLabels);
+        charts.setStepTimes(s.stepTimes.size() == s.stepLabels.size() && !s.stepTimes.isEmpty() ? s.stepTimes::get : null);
         showPlan();
         messages.getItems().setAll(s.warnings);
         rightTabs.getTabs().get(2).setText(s.warnings.isEmpty() ? "Messages" : "Messages (" + s.warnings.size() + ")");

@@ -5,6 +5,10 @@ import org.gyreplan.app.pipeline.NamedSeries;
 import org.gyreplan.app.pipeline.RunWarning;
 import org.gyreplan.app.pipeline.StudyResult;
 import org.gyreplan.app.scenario.Scenario;
+import org.gyreplan.gisdata.basemap.LandPolygons;
+import org.gyreplan.gisdata.cf.BoundingBox;
+import org.gyreplan.gisdata.cf.VariableMapping;
+import org.gyreplan.gisdata.raster.Bathymetry;
 import org.gyreplan.gisdata.vector.PolygonFeature;
 import org.gyreplan.gisdata.vector.PolygonFiles;
 import org.gyreplan.solver.grid.ScalarField;
@@ -57,8 +61,31 @@ public final class PipelineStudies {
         if (s.survey != null && s.survey.port != null && s.survey.port.lonDeg != null) {
             m.port = new MapPoint("port", s.survey.port.name, s.survey.port.lonDeg, s.survey.port.latDeg, Double.NaN);
         }
+        addLand(m);
+        m.depth = depth(s, m.basin);
         m.warnings.add("Scenario loaded: run the study (Run study) to compute fields and the plan.");
         return m;
+    }
+
+    /** Natural Earth land (1:50m) as one item per polygon, so the map can skip what is out of view. */
+    static void addLand(MapStudy m) {
+        Geometry land = LandPolygons.load(LandPolygons.Resolution.MEDIUM_50M);
+        for (int k = 0; k < land.getNumGeometries(); k++) m.land.add(land.getGeometryN(k));
+    }
+
+    /** Sea-floor depth (m, positive down, NaN on land) from the scenario's bathymetry file around the basin; or null. */
+    static ScalarField depth(Scenario s, Geometry basin) throws Exception {
+        if (s.bathymetry == null || basin == null) return null;
+        Path file = s.resolve(s.bathymetry);
+        if (!Files.isRegularFile(file)) return null;
+        var e = basin.getEnvelopeInternal();
+        double margin = 2;
+        ScalarField elev = Bathymetry.elevation(file, new BoundingBox(e.getMinX() - margin, e.getMaxX() + margin,
+                Math.max(-90, e.getMinY() - margin), Math.min(90, e.getMaxY() + margin)), VariableMapping.automatic(),
+                Bathymetry.Sign.AUTO);
+        double[] d = new double[elev.values().length];
+        for (int k = 0; k < d.length; k++) d[k] = elev.values()[k] < 0 ? -elev.values()[k] : Double.NaN;
+        return new ScalarField(elev.grid(), d, "depth", "m", "Sea-floor depth, positive down (" + file.getFileName() + ")");
     }
 
     /** The basin polygon of a scenario: its file, or its inline coordinates; null if neither. */
@@ -112,7 +139,8 @@ public final class PipelineStudies {
             if (key.contains("streamfunction") || key.equals("psi")) m.streamfunction = f;
             m.scalars.add(new MapStudy.Scalar(title(e.getKey(), f), List.of(f), signed(f)));
         }
-        m.depth = depth;
+        if (depth != null) m.depth = depth;
+        else depth = m.depth;
         for (Map.Entry<String, VectorField> e : r.vectors().entrySet()) {
             m.vectors.add(new MapStudy.Vector(title(e.getKey(), e.getValue().eastward()) + " (arrows)",
                     title(e.getKey(), e.getValue().eastward()), List.of(e.getValue())));
@@ -129,7 +157,9 @@ public final class PipelineStudies {
                             c.candidate().latDeg(), Double.NaN));
                 }
             } else if (v instanceof ScalarField f) {
-                m.scalars.add(new MapStudy.Scalar(title(e.getKey(), f), List.of(f), signed(f)));
+                String key = e.getKey().toLowerCase(Locale.ROOT);
+                if (key.contains("depth") || key.contains("bathymetry")) { m.depth = f; depth = f; }
+                else m.scalars.add(new MapStudy.Scalar(title(e.getKey(), f), List.of(f), signed(f)));
             } else if (v instanceof List<?> list && !list.isEmpty()) {
                 if (list.get(0) instanceof UpwellingZone) {
                     for (Object o : list) m.upwellingZones.add(((UpwellingZone) o).polygon());
@@ -160,12 +190,28 @@ public final class PipelineStudies {
             m.port = new MapPoint("port", route.port().id(), route.port().lonDeg(), route.port().latDeg(), Double.NaN);
             if (schedule != null) m.cruise = new CruisePlan(route, schedule, Obstacles.of(m.exclusions, 2, 5), depth);
         }
+        // index points; when nothing else varies in time, their monthly means drive the time slider
+        java.util.TreeSet<java.time.YearMonth> months = new java.util.TreeSet<>();
+        for (NamedSeries ns : r.series()) {
+            if (Double.isFinite(ns.lonDeg()) && Double.isFinite(ns.latDeg())) {
+                for (LocalDate d : ns.dates()) months.add(java.time.YearMonth.from(d));
+            }
+        }
+        boolean monthlySteps = m.stepLabels.isEmpty() && months.size() > 1;
+        List<java.time.YearMonth> monthList = new ArrayList<>(months);
+        if (monthlySteps) {
+            for (java.time.YearMonth ym : monthList) {
+                m.stepLabels.add(ym.toString());
+                m.stepTimes.add(ym.atDay(15).atStartOfDay().toInstant(ZoneOffset.UTC));
+            }
+        }
         for (NamedSeries ns : r.series()) {
             if (!Double.isFinite(ns.lonDeg()) || !Double.isFinite(ns.latDeg())) continue;
             PointSeries ps = pointSeries(ns);
             double mean = mean(ns.values());
+            double[] steps = monthlySteps ? monthlyMeans(ns, monthList) : null;
             m.indexPoints.add(new MapStudy.IndexPoint(ns.name(), ns.name(), ns.lonDeg(), ns.latDeg(), mean,
-                    "Mean " + ns.quantity(), ns.units(), ps));
+                    monthlySteps ? "Monthly mean " + ns.quantity() : "Mean " + ns.quantity(), ns.units(), ps, steps));
         }
         for (Path p : r.outputFiles()) m.outputs.put(p.toString(), r.outputDir().resolve(p).toString());
         return m;
@@ -228,6 +274,22 @@ public final class PipelineStudies {
                 cv.stream().mapToDouble(Double::doubleValue).toArray(), cumUnits, starts, ends);
     }
 
+    /** Mean of a series in each of the given months (NaN where it has no value). */
+    static double[] monthlyMeans(NamedSeries ns, List<java.time.YearMonth> months) {
+        java.util.Map<java.time.YearMonth, Integer> at = new java.util.HashMap<>();
+        for (int k = 0; k < months.size(); k++) at.put(months.get(k), k);
+        double[] sum = new double[months.size()];
+        int[] n = new int[months.size()];
+        for (int k = 0; k < ns.values().length; k++) {
+            double v = ns.values()[k];
+            Integer q = at.get(java.time.YearMonth.from(ns.dates().get(k)));
+            if (q != null && Double.isFinite(v)) { sum[q] += v; n[q]++; }
+        }
+        double[] out = new double[months.size()];
+        for (int k = 0; k < out.length; k++) out[k] = n[k] > 0 ? sum[k] / n[k] : Double.NaN;
+        return out;
+    }
+
     private static boolean monthly(List<?> l) { return l.size() == 12; }
 
     private static int rank(String name) {
@@ -241,8 +303,11 @@ public final class PipelineStudies {
         return r[0] < 0 && r[1] > 0;
     }
 
+    /** A short layer title from the result's key ("ekman_pumping" → "Ekman pumping"). */
     private static String title(String key, ScalarField f) {
-        String t = f.longName() != null && f.longName().length() <= 48 ? f.longName() : key.replace('_', ' ');
+        String t = key.replace('_', ' ').trim();
+        if (t.isEmpty()) t = f.name();
+        t = t.replace("ekman", "Ekman").replace("sverdrup", "Sverdrup").replace("stommel", "Stommel").replace("munk", "Munk");
         return Character.toUpperCase(t.charAt(0)) + t.substring(1);
     }
 

@@ -98,12 +98,26 @@ public class ChartPane extends VBox {
         }
     }
 
-    /** Moves the "this step" marker (series chart) to a time step. */
+    private java.util.function.IntFunction<Instant> stepTime = k -> null;
+
+    /** How a time step maps to an instant (null = the step indexes the series directly). */
+    public void setStepTimes(java.util.function.IntFunction<Instant> f) { stepTime = f == null ? k -> null : f; }
+
+    /** Moves the "this step" marker (series chart) to a time step: the series value nearest the step's time. */
     public void setTimeStep(int timeStep) {
         if (shown == null) return;
         marker.getData().clear();
-        if (timeStep >= 0 && timeStep < shown.times().size() && Double.isFinite(shown.values()[timeStep])) {
-            marker.getData().add(new XYChart.Data<>(year(shown.times().get(timeStep)), shown.values()[timeStep]));
+        int k = timeStep;
+        Instant t = stepTime.apply(timeStep);
+        if (t != null) {
+            k = 0;
+            for (int q = 1; q < shown.times().size(); q++) {
+                if (Math.abs(shown.times().get(q).getEpochSecond() - t.getEpochSecond())
+                        < Math.abs(shown.times().get(k).getEpochSecond() - t.getEpochSecond())) k = q;
+            }
+        }
+        if (k >= 0 && k < shown.times().size() && Double.isFinite(shown.values()[k])) {
+            marker.getData().add(new XYChart.Data<>(year(shown.times().get(k)), shown.values()[k]));
         }
     }
 
