@@ -263,7 +263,8 @@ final class Products {
         ChartRenderer.ChartSpec c2 = new ChartRenderer.ChartSpec("Cumulative upwelling index from 1 January, " + where,
                 "(m³ s⁻¹ per 100 m) · day", dates)
                 .line(new ChartRenderer.Line("cumulative index", cum, new Color(0x1F, 0x4E, 0x79), 2f))
-                .note("Spring transition = minimum of the cumulative index; end of season = maximum (Bograd et al. 2009).");
+                .note("Spring transition = minimum of the cumulative index; end of season = maximum (Bograd et al. 2009).")
+                .breakYearly();
         for (UpwellingSeason.Season se : cm.seasons()) {
             if (!se.isResolved()) continue;
             LocalDate a = se.springTransitionDate(), b = se.endDate();
@@ -404,7 +405,8 @@ final class Products {
                 String name = c.point() == null ? "mean of all points" : c.point().name();
                 String pos = c.point() == null ? "" : String.format(Locale.ROOT, "%.2f°, %.2f°", c.point().latDeg(), c.point().lonDeg());
                 String bearing = c.point() == null ? "" : String.format(Locale.ROOT, "%.0f°", c.point().offshoreBearingDeg());
-                String peak = c.climatology() == null ? "–" : java.time.Month.of(c.climatology().maxMonth()).getDisplayName(java.time.format.TextStyle.SHORT, Locale.ENGLISH);
+                int pm = c.climatology() == null ? 0 : c.climatology().maxMonth();
+                String peak = pm < 1 || pm > 12 ? "–" : java.time.Month.of(pm).getDisplayName(java.time.format.TextStyle.SHORT, Locale.ENGLISH);
                 List<UpwellingSeason.Season> ss = c.seasons().isEmpty() ? List.of() : c.seasons();
                 int rows = Math.max(1, ss.size());
                 for (int k = 0; k < rows; k++) {

@@ -197,6 +197,15 @@ public final class StudyPipeline {
         VariableMapping mapping = mapping(s);
         boolean pressure = s.winds.source == Scenario.WindSourceKind.PRESSURE;
         st.progress.progress("winds", 0.0, "opening " + file.getFileName());
+        try (GriddedSeries whole = pressure
+                ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, BoundingBox.world(), from, to)
+                : GriddedSeries.openWind(file, mapping, BoundingBox.world(), from, to)) {
+            checkCoverage(st, whole.grid(), e, file);
+        } catch (IllegalArgumentException ex) {
+            throw new StudyException(file, "winds", ex.getMessage(), ex);
+        } catch (IOException ex) {
+            throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
+        }
         try (GriddedSeries series = pressure
                 ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, box, from, to)
                 : GriddedSeries.openWind(file, mapping, box, from, to)) {
@@ -214,7 +223,7 @@ public final class StudyPipeline {
             SurfaceAccumulator acc = new SurfaceAccumulator(g);
             UpwellingStatistics stats = UpwellingStatistics.on(g);
             CoastalUpwellingIndex index = CoastalUpwellingIndex.defaults().withConstants(st.constants)
-                    .withEquatorialCutoffDeg(st.cutoff.latitudeDeg());
+                    .withCutoff(st.cutoff);
             int np = st.coastPoints.size();
             double[][] ui = new double[np][nt];
             Instant[] times = new Instant[nt];
@@ -378,7 +387,7 @@ public final class StudyPipeline {
         st.fields.put("streamfunction", psi);
         st.gyre = sol;
         for (String w : sol.warnings()) {
-            RunWarning.Kind k = w.toLowerCase(Locale.ROOT).contains("resolution") || w.toLowerCase(Locale.ROOT).contains("cells")
+            RunWarning.Kind k = w.toLowerCase(Locale.ROOT).contains("resolution")
                     ? RunWarning.Kind.RESOLUTION : RunWarning.Kind.GEOMETRY;
             st.warn(k, "gyre: " + w);
         }
@@ -418,7 +427,9 @@ public final class StudyPipeline {
             double sum = 0; int n = 0;
             for (double v : all.daily().values()) if (Double.isFinite(v)) { sum += v; n++; }
             if (n > 0) st.headlines.put(Headline.MEAN_COASTAL_INDEX, sum / n);
-            if (all.climatology() != null) st.headlines.put(Headline.PEAK_INDEX_MONTH, (double) all.climatology().maxMonth());
+            if (all.climatology() != null && all.climatology().maxMonth() >= 1) {
+                st.headlines.put(Headline.PEAK_INDEX_MONTH, (double) all.climatology().maxMonth());
+            }
             double sti = 0; int ns = 0;
             for (UpwellingSeason.Season s : all.seasons()) if (s.isResolved()) { sti += s.springTransitionDay(); ns++; }
             if (ns > 0) st.headlines.put(Headline.SPRING_TRANSITION_DAY, sti / ns);

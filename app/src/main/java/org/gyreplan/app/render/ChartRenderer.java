@@ -41,6 +41,7 @@ public final class ChartRenderer {
         final List<Marker> markers = new ArrayList<>();
         Shade shade;
         String note;
+        boolean breakYearly;
 
         public ChartSpec(String title, String yLabel, List<LocalDate> dates) {
             this.title = title;
@@ -56,6 +57,8 @@ public final class ChartRenderer {
         public ChartSpec shade(Shade s) { this.shade = s; return this; }
         public ChartSpec marker(Marker m) { markers.add(m); return this; }
         public ChartSpec note(String n) { this.note = n; return this; }
+        /** Lift the pen at each 1 January (for quantities that restart every year, e.g. cumulative sums). */
+        public ChartSpec breakYearly() { this.breakYearly = true; return this; }
     }
 
     static final Color UP = new Color(0x23, 0x83, 0xA8);
@@ -162,6 +165,7 @@ public final class ChartRenderer {
             for (int k = 0; k < n; k++) {
                 double v = l.values()[k];
                 if (!Double.isFinite(v)) { pen = false; continue; }
+                if (c.breakYearly && k > 0 && c.dates.get(k).getYear() != c.dates.get(k - 1).getYear()) pen = false;
                 if (!pen) p.moveTo(X.applyAsDouble(k), Y.applyAsDouble(v));
                 else p.lineTo(X.applyAsDouble(k), Y.applyAsDouble(v));
                 pen = true;
@@ -178,7 +182,9 @@ public final class ChartRenderer {
             g.setColor(m.color());
             g.setStroke(new BasicStroke(1.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 4f, new float[] {4f, 3f}, 0f));
             g.draw(new Line2D.Double(x, top, x, top + ph));
-            g.drawString(m.label(), (float) x + 3, top + 12 + 13 * (stagger++ % 2));
+            int lw = g.getFontMetrics().stringWidth(m.label());
+            float lx0 = x + 3 + lw > left + pw ? (float) (x - 3 - lw) : (float) x + 3;
+            g.drawString(m.label(), lx0, top + 12 + 13 * (stagger++ % 2));
         }
         // frame, title, labels, legend
         g.setStroke(new BasicStroke(1f));

@@ -98,6 +98,7 @@ public final class ColorScale {
     public String format(double v) {
         double a = Math.abs(max - min);
         if (v == 0) return "0";
+        if (a >= 1000 && Math.abs(v) < 1e7) return String.format(Locale.ROOT, "%,.0f", v);
         if (a >= 1000 || a < 0.01) return String.format(Locale.ROOT, "%.1e", v);
         if (a >= 10) return String.format(Locale.ROOT, "%.0f", v);
         if (a >= 1) return String.format(Locale.ROOT, "%.1f", v);

@@ -129,7 +129,14 @@ public final class MapRenderer {
         final int plotH = ph;
         Proj p = new Proj(west, east, south, north, left, top, pw, plotH);
 
-        // field cells (land and missing drawn as land colour; the basin mask decides)
+        // field cells (land and missing drawn as land colour; the basin mask decides), clipped to the coastline
+        gr.setColor(LAND);
+        gr.fillRect(left, top, pw, ph);
+        if (!m.coast.isEmpty()) {
+            Path2D basin = new Path2D.Double(Path2D.WIND_EVEN_ODD);
+            for (List<double[]> ring : m.coast) basin.append(p.path(ring, true), false);
+            gr.setClip(basin);
+        }
         ScalarField f = m.field;
         LonLatGrid fg = f.grid();
         for (int j = 0; j < fg.ny(); j++) {
@@ -151,6 +158,7 @@ public final class MapRenderer {
                 gr.fillRect(x0, y0, Math.max(1, x1 - x0), Math.max(1, y1 - y0));
             }
         }
+        gr.setClip(null);
         gr.setClip(left, top, pw, plotH);
         // base-map land
         for (List<double[]> ring : m.land) {

@@ -279,12 +279,18 @@ public final class Scenario {
             return ok;
         }
 
+        private static String g(double v) {
+            if (v == Math.rint(v) && Math.abs(v) < 1e9) return Long.toString((long) v);
+            String t = String.format(java.util.Locale.ROOT, "%.4g", v);
+            return t.contains("e") ? t : t.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+
         @Override
         public String toString() {
             List<String> parts = new ArrayList<>();
-            if (value != null) parts.add(value + " ± " + (tolerance == null ? 0.0 : tolerance));
-            if (min != null) parts.add("≥ " + min);
-            if (max != null) parts.add("≤ " + max);
+            if (value != null) parts.add(g(value) + " ± " + g(tolerance == null ? 0.0 : tolerance));
+            if (min != null) parts.add("≥ " + g(min));
+            if (max != null) parts.add("≤ " + g(max));
             return String.join(", ", parts);
         }
     }

@@ -51,7 +51,7 @@ class CliGoldenTest {
         Path s = scenario();
         Run r = exec("inspect", s.toString());
         assertEquals(0, r.code(), r.err());
-        Golden.check("inspect-scenario", r.out().replace(dir.toString(), "<dir>"));
+        Golden.check("inspect-scenario", r.out().replace(dir.toString(), "<dir>").replace(org.gyreplan.app.pipeline.TestScenarios.demoWinds().toString(), "<winds>"));
     }
 
     @Test
@@ -61,7 +61,7 @@ class CliGoldenTest {
         Run r = exec("run", s.toString(), "--out", out.toString(), "--progress", "lines");
         assertEquals(0, r.code(), r.err());
         assertTrue(Files.isRegularFile(out.resolve("report.html")));
-        Golden.check("run-lines", r.out().replace(dir.toString(), "<dir>"));
+        Golden.check("run-lines", r.out().replace(dir.toString(), "<dir>").replace(org.gyreplan.app.pipeline.TestScenarios.demoWinds().toString(), "<winds>"));
     }
 
     @Test
@@ -70,7 +70,7 @@ class CliGoldenTest {
         Files.writeString(s, Files.readString(s).replace("depth: 1000", "depth: -5"));
         Run r = exec("run", s.toString(), "--out", dir.resolve("o").toString());
         assertEquals(GyreplanCommand.EXIT_INPUT, r.code());
-        assertTrue(r.err().contains(s + ":7:"), r.err());
+        assertTrue(r.err().contains(s + ":11:"), r.err());
         assertTrue(r.err().contains("gyre.depth: must be > 0"), r.err());
         assertFalse(Files.exists(dir.resolve("o")), "nothing may be written for an invalid scenario");
     }
@@ -103,22 +103,7 @@ class CliGoldenTest {
     }
 
     private Path scenario() throws IOException {
-        Files.writeString(dir.resolve("winds.nc"), "x");
-        Path s = dir.resolve("study.yaml");
-        Files.writeString(s, """
-                study: {name: Golden test study}
-                basin:
-                  coordinates: [[-20, 30], [-16, 30], [-16, 33], [-20, 33]]
-                winds: {source: gridded, file: winds.nc}
-                dragLaw: {name: large-pond-1981}
-                gyre:
-                  depth: 1000
-                  model: stommel
-                  bottomFriction: 1.0e-6
-                grid: {spacingDeg: 0.5}
-                outputs: [report]
-                """);
-        return s;
+        return org.gyreplan.app.pipeline.TestScenarios.small(dir, "Golden test study", "report", "");
     }
 
     static String quote(String s) { return Matcher.quoteReplacement(s); }

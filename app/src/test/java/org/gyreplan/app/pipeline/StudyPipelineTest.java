@@ -19,18 +19,36 @@ class StudyPipelineTest {
     @TempDir Path dir;
 
     Scenario scenario() throws Exception {
-        Files.writeString(dir.resolve("winds.nc"), "abc");
-        Path s = dir.resolve("s.yaml");
-        Files.writeString(s, """
-                study: {name: Pipeline test}
-                basin:
-                  coordinates: [[-20, 30], [-16, 30], [-16, 33], [-20, 33]]
-                winds: {source: gridded, file: winds.nc}
-                dragLaw: {name: large-pond-1981}
-                gyre: {model: stommel, bottomFriction: 1.0e-6, depth: 1000}
-                grid: {spacingDeg: 0.5}
-                """);
-        return ScenarioFiles.load(s);
+        return ScenarioFiles.load(TestScenarios.small(dir, "Pipeline test", "maps, report, csv", ""));
+    }
+
+    @Test
+    void sha256OfAKnownText() throws Exception {
+        Path f = dir.resolve("abc.txt");
+        Files.writeString(f, "abc");
+        // SHA-256 of the three bytes "abc" (FIPS 180-2, appendix B.1 example)
+        assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", StudyPipeline.sha256(f));
+    }
+
+    @Test
+    void basinOutsideTheWindDataIsRefusedBeforeWork() throws Exception {
+        Path s = TestScenarios.small(dir, "Outside", "report", "").getParent().resolve("study.yaml");
+        Files.writeString(s, Files.readString(s).replace("[[-140, 30], [-134, 30], [-134, 36], [-140, 36]]",
+                "[[-120, 30], [-110, 30], [-110, 36], [-120, 36]]"));
+        StudyException e = assertThrows(StudyException.class,
+                () -> new StudyPipeline().run(ScenarioFiles.load(s), dir.resolve("out"), null, null));
+        assertTrue(e.getMessage().contains("outside the wind data") && e.getMessage().contains("winds.nc"), e.getMessage());
+        assertFalse(Files.exists(dir.resolve("out")) && Files.list(dir.resolve("out")).findAny().isPresent());
+    }
+
+    @Test
+    void cancelWhileStreamingWindsLeavesNoFiles() throws Exception {
+        Scenario s = scenario();
+        Path out = dir.resolve("out");
+        CancelToken cancel = new CancelToken();
+        assertThrows(CancelledException.class, () -> new StudyPipeline().run(s, out,
+                (stage, f, m) -> { if (stage.equals("winds") && f > 0.5) cancel.cancel(); }, cancel));
+        assertFalse(Files.exists(out) && Files.list(out).findAny().isPresent());
     }
 
     @Test
@@ -55,9 +73,11 @@ class StudyPipelineTest {
         assertTrue(r.report().isPresent());
         for (Path p : r.outputFiles()) assertTrue(Files.isRegularFile(out.resolve(p)), p.toString());
         Provenance.InputFile wind = r.provenance().inputs().stream().filter(f -> f.role().startsWith("winds")).findFirst().orElseThrow();
-        // SHA-256 of the three bytes "abc" (FIPS 180-2, appendix B.1 example)
-        assertEquals("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad", wind.sha256());
-        assertEquals(3, wind.bytes());
+        assertEquals(StudyPipeline.sha256(TestScenarios.demoWinds()), wind.sha256());
+        assertEquals(Files.size(TestScenarios.demoWinds()), wind.bytes());
+        assertEquals(10.0, r.headlines().get(org.gyreplan.app.scenario.Headline.TIME_STEPS), "ten daily steps");
+        assertEquals(1, r.series().size());
+        assertEquals(10, r.series().get(0).values().length);
         try (Stream<Path> left = Files.list(dir)) {
             assertTrue(left.noneMatch(p -> p.getFileName().toString().contains("staging")));
         }

@@ -34,18 +34,7 @@ class ReportBrowserTest {
 
     @Test
     void reportRendersInHeadlessChromium() throws Exception {
-        Files.writeString(dir.resolve("winds.nc"), "x");
-        Path s = dir.resolve("s.yaml");
-        Files.writeString(s, """
-                study: {name: Browser test study}
-                basin:
-                  coordinates: [[-20, 30], [-16, 30], [-16, 33], [-20, 33]]
-                winds: {source: gridded, file: winds.nc}
-                dragLaw: {name: large-pond-1981}
-                gyre: {model: stommel, bottomFriction: 1.0e-6, depth: 1000}
-                grid: {spacingDeg: 0.5}
-                outputs: [maps, report]
-                """);
+        Path s = org.gyreplan.app.pipeline.TestScenarios.small(dir, "Browser test study", "maps, report", "");
         Scenario sc = ScenarioFiles.load(s);
         StudyResult r = new StudyPipeline().run(sc, dir.resolve("out"), null, null);
         Path html = r.report().orElseThrow();
