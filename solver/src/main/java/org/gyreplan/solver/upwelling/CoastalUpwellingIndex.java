@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.IntFunction;
 
 /**
@@ -55,6 +56,12 @@ public final class CoastalUpwellingIndex {
     private final EquatorialCutoff cutoff;
     private final StressSampling sampling;
     private final double maxDataDistanceKm;
+    /** Nearest-cell samplers by grid geometry and position (they do not depend on masks or values). */
+    private final ConcurrentHashMap<SamplerKey, FieldSampler> samplers = new ConcurrentHashMap<>();
+    private static final int MAX_CACHED_SAMPLERS = 4096;
+
+    private record SamplerKey(int nx, int ny, double lon0, double lat0, double dLon, double dLat, double radius,
+                              double lonDeg, double latDeg, StressSampling mode) { }
 
     /**
      * @param constants           ρ₀ and Ω are used
@@ -146,11 +153,15 @@ public final class CoastalUpwellingIndex {
     public List<PointIndex> atPoints(VectorField stressPa, List<CoastPoint> points) {
         checkStressUnits(stressPa);
         List<PointIndex> out = new ArrayList<>(points.size());
-        for (CoastPoint p : points) {
-            FieldSampler s = new FieldSampler(stressPa.grid(), p.lonDeg(), p.latDeg(), sampling);
-            out.add(sampleAndCompute(s, p, stressPa));
-        }
+        for (CoastPoint p : points) out.add(sampleAndCompute(sampler(stressPa.grid(), p), p, stressPa));
         return out;
+    }
+
+    private FieldSampler sampler(org.gyreplan.solver.grid.LonLatGrid g, CoastPoint p) {
+        SamplerKey key = new SamplerKey(g.nx(), g.ny(), g.lon0Deg(), g.lat0Deg(), g.dLonDeg(), g.dLatDeg(), g.radius(),
+                p.lonDeg(), p.latDeg(), sampling);
+        if (samplers.size() > MAX_CACHED_SAMPLERS) samplers.clear();
+        return samplers.computeIfAbsent(key, k -> new FieldSampler(g, p.lonDeg(), p.latDeg(), sampling));
     }
 
     private PointIndex sampleAndCompute(FieldSampler s, CoastPoint p, VectorField stress) {
@@ -180,9 +191,7 @@ public final class CoastalUpwellingIndex {
             if (first == null) {
                 first = st;
                 samplers = new FieldSampler[points.size()];
-                for (int q = 0; q < points.size(); q++) {
-                    samplers[q] = new FieldSampler(st.grid(), points.get(q).lonDeg(), points.get(q).latDeg(), sampling);
-                }
+                for (int q = 0; q < points.size(); q++) samplers[q] = sampler(st.grid(), points.get(q));
             } else if (!first.grid().sameGeometry(st.grid())) {
                 throw new IllegalArgumentException("stress field at step " + k + " (" + times.get(k)
                         + ") lies on another grid than step 0");
