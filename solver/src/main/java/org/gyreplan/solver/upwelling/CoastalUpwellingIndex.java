@@ -22,7 +22,7 @@ import java.util.function.IntFunction;
  *
  * <pre>
  *   Qₓ = τᵧ / (ρ₀ f),   Qᵧ = −τₓ / (ρ₀ f)                 (Ekman transport per unit width, m² s⁻¹)
- *   UI = 100 m · (Qₓ sin β + Qᵧ cos β)                     (m³ s⁻¹ per 100 m of coastline)
+ *   UI = 100 m · (Qₓ sin θₙ + Qᵧ cos θₙ)                   (m³ s⁻¹ per 100 m of coastline)
  *   f  = 2Ω sin φ
  * </pre>
  * <table>
@@ -30,7 +30,7 @@ import java.util.function.IntFunction;
  *   <tr><td>τₓ, τᵧ</td><td>eastward, northward surface stress on the ocean</td><td>Pa</td></tr>
  *   <tr><td>ρ₀</td><td>sea-water density (default 1025)</td><td>kg m⁻³</td></tr>
  *   <tr><td>f</td><td>Coriolis parameter at the coast point's latitude φ</td><td>s⁻¹</td></tr>
- *   <tr><td>β</td><td>offshore bearing of the coast point (unit normal into the ocean)</td><td>degrees from north</td></tr>
+ *   <tr><td>θₙ</td><td>offshore bearing of the coast point (unit normal into the ocean)</td><td>degrees from north</td></tr>
  *   <tr><td>UI</td><td>index</td><td>m³ s⁻¹ per 100 m of coastline</td></tr>
  * </table>
  * <p><b>Sign</b>: UI &gt; 0 is offshore transport (upwelling-favourable), UI &lt; 0 onshore (downwelling). The
@@ -40,7 +40,7 @@ import java.util.function.IntFunction;
  * <p><b>Validity</b>: steady Ekman balance, so the index is a daily or longer average; undefined near the equator:
  * within the cut-off ({@link EquatorialCutoff}, default 5°) it is NaN and flagged
  * {@link IndexFlag#EQUATORIAL_CUTOFF}. The latitude used for f is the coast point's, not the wind cell's.
- * <p><b>Sampling</b> of stress fields: {@link StressSampling#NEAREST_OCEAN} (default: the nearest cell with finite
+ * <p><b>Sampling</b> of stress fields: {@link StressSampling#NEAREST_OCEAN} (default: the nearest ocean cell with finite
  * stress) or {@link StressSampling#BILINEAR}; the distance from the point to the cell used is reported.
  * <p>The transport itself is {@link EkmanTransport#of}; this class adds the coast geometry and the sampling.
  * <p><b>Source</b>: Ekman transport, Ekman (1905) as written by Stewart, Introduction to Physical Oceanography,
