@@ -89,7 +89,7 @@ public class MainWindow extends BorderPane {
     private final ToggleGroup tools = new ToggleGroup();
 
     private final StudyRunner runner;
-    private final ScenarioFiles scenarioFiles;
+    private final ScenarioEditing scenarioFiles;
     private Path scenario;
     private MapStudy study;
     private StudyLayers.Built built;
@@ -107,7 +107,7 @@ public class MainWindow extends BorderPane {
      * @param scenarioFiles reads and saves scenario geometry, or null if unavailable
      * @param scenario      scenario file, or null
      */
-    public MainWindow(StudyRunner runner, ScenarioFiles scenarioFiles, Path scenario) {
+    public MainWindow(StudyRunner runner, ScenarioEditing scenarioFiles, Path scenario) {
         this.runner = runner;
         this.scenarioFiles = scenarioFiles;
         this.scenario = scenario;
@@ -189,6 +189,7 @@ public class MainWindow extends BorderPane {
         built.moorings().addMoveListener(p -> pointMoved("Mooring site", p));
         built.stations().addMoveListener(p -> pointMoved("Station", p));
         timeBar.setSteps(s.stepLabels);
+        charts.setStepTimes(s.stepTimes.size() == s.stepLabels.size() && !s.stepTimes.isEmpty() ? s.stepTimes::get : null);
         showPlan();
         messages.getItems().setAll(s.warnings);
         rightTabs.getTabs().get(2).setText(s.warnings.isEmpty() ? "Messages" : "Messages (" + s.warnings.size() + ")");
@@ -263,11 +264,13 @@ public class MainWindow extends BorderPane {
     public void addPolygon(Geometry g, DrawTarget target) {
         if (target == DrawTarget.BASIN) {
             study.basin = g;
+            study.basinEdited = true;
             built.basin().setAll(List.of(new PolygonLayer.Item(g, null)));
             built.basin().setVisible(true);
             status.setText("Basin set (" + g.getCoordinates().length + " vertices). Save the scenario and run to use it.");
         } else {
             study.exclusions.add(g);
+            study.exclusionsEdited = true;
             built.exclusions().add(g, null);
             built.exclusions().setVisible(true);
             status.setText("Exclusion zone added (" + study.exclusions.size() + " in total). Save and run to use it.");
@@ -347,7 +350,7 @@ public class MainWindow extends BorderPane {
         CancelToken token = new CancelToken();
         cancelToken = token;
         Path scen = scenario;
-        Path out = scen.toAbsolutePath().getParent().resolve("output");
+        Path out = outputFolder(scen);
         Task<MapStudy> t = new Task<>() {
             @Override
             protected MapStudy call() throws Exception {
@@ -379,6 +382,17 @@ public class MainWindow extends BorderPane {
         th.setDaemon(true);
         th.start();
         return t;
+    }
+
+    /**
+     * Where a run writes: {@code -Dgyreplan.out=<folder>} if set, else {@code gyreplan-output/<scenario folder>}
+     * under the working directory (inputs are never written to).
+     */
+    static Path outputFolder(Path scenario) {
+        String base = System.getProperty("gyreplan.out");
+        Path parent = scenario.toAbsolutePath().getParent();
+        String name = parent == null || parent.getFileName() == null ? "study" : parent.getFileName().toString();
+        return base != null ? Path.of(base).toAbsolutePath() : Path.of("gyreplan-output", name).toAbsolutePath();
     }
 
     /** Asks the running study to stop. */
@@ -541,7 +555,10 @@ public class MainWindow extends BorderPane {
     }
 
     /** Makes a scenario the current one, shows its geometry if it can be read, and runs it. */
-    public void openScenario(Path file) {
+    public void openScenario(Path file) { openScenario(file, true); }
+
+    /** Makes a scenario the current one and shows its geometry if it can be read; runs it if asked. */
+    public void openScenario(Path file, boolean run) {
         scenario = file;
         titleSink.accept(windowTitle());
         if (scenarioFiles != null) {
@@ -553,7 +570,7 @@ public class MainWindow extends BorderPane {
                 return;
             }
         }
-        runStudy();
+        if (run) runStudy();
     }
 
     private void choosePolygon(DrawTarget target) {

@@ -175,7 +175,7 @@ class MainWindowUiTest {
 
         // a double-click closes too (events fired directly: robot double-clicks are timing-sensitive under load)
         robot.clickOn("#toolBasin");
-        var c = window.map().canvas();
+        var c = window.map().overlay();
         double[][] pts = {{-55, 18}, {-30, 18}, {-30, 40}, {-55, 40}};
         robot.interact(() -> {
             for (int k = 0; k < pts.length; k++) {

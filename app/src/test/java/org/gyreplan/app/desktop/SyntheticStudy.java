@@ -94,7 +94,7 @@ public final class SyntheticStudy {
                 acc += vals[k];
                 cum[k] = acc;
             }
-            PointSeries ps = new PointSeries("Coastal upwelling index", "m3 s-1 per 100 m", times, vals, vals.clone(), cum,
+            PointSeries ps = new PointSeries("Coastal upwelling index", "m3 s-1 per 100 m", times, vals, vals.clone(), times, cum,
                     "m3 s-1 per 100 m × months", List.of(times.get(2)), List.of(times.get(9)));
             s.indexPoints.add(new MapStudy.IndexPoint("P" + (p + 1), "Index point " + (p + 1), -21, lats[p],
                     vals[6], "Upwelling index, July", "m3 s-1 per 100 m", ps));

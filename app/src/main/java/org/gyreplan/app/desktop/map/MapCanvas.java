@@ -43,6 +43,8 @@ public class MapCanvas extends Region {
     private static final Color SEA = Color.rgb(246, 249, 252);
 
     private final Canvas canvas = new Canvas(800, 600);
+    /** Transparent canvas on top for the polygon being drawn, so rubber-banding does not redraw the layers. */
+    private final Canvas overlay = new Canvas(800, 600);
     private final MapViewport view = new MapViewport(MapProjection.EQUIRECTANGULAR);
     private final ObservableList<MapLayer> layers = FXCollections.observableArrayList();
     private final IntegerProperty timeStep = new SimpleIntegerProperty(0);
@@ -63,24 +65,24 @@ public class MapCanvas extends Region {
     private boolean redrawPending;
 
     public MapCanvas() {
-        getChildren().add(canvas);
+        getChildren().addAll(canvas, overlay);
         setFocusTraversable(true);
         setMinSize(200, 150);
         setPrefSize(900, 620);
         ChangeListener<Object> redraw = (o, a, b) -> redraw();
         timeStep.addListener(redraw);
-        tool.addListener((o, a, b) -> { sketch.clear(); sketchCursor = null; redraw(); });
+        tool.addListener((o, a, b) -> { sketch.clear(); sketchCursor = null; redrawOverlay(); });
         layers.addListener((ListChangeListener<MapLayer>) c -> {
             while (c.next()) for (MapLayer l : c.getAddedSubList()) l.visibleProperty().addListener(redraw);
             redraw();
         });
-        canvas.setOnMousePressed(this::pressed);
-        canvas.setOnMouseDragged(this::dragged);
-        canvas.setOnMouseReleased(this::released);
-        canvas.setOnMouseMoved(this::moved);
-        canvas.setOnScroll(this::scrolled);
+        overlay.setOnMousePressed(this::pressed);
+        overlay.setOnMouseDragged(this::dragged);
+        overlay.setOnMouseReleased(this::released);
+        overlay.setOnMouseMoved(this::moved);
+        overlay.setOnScroll(this::scrolled);
         setOnKeyPressed(e -> {
-            if (e.getCode() == KeyCode.ESCAPE) { sketch.clear(); sketchCursor = null; redraw(); }
+            if (e.getCode() == KeyCode.ESCAPE) { sketch.clear(); sketchCursor = null; redrawOverlay(); }
             if (e.getCode() == KeyCode.ENTER) closeSketch();
         });
     }
@@ -90,6 +92,8 @@ public class MapCanvas extends Region {
     public IntegerProperty timeStepProperty() { return timeStep; }
     public ObjectProperty<Tool> toolProperty() { return tool; }
     public Canvas canvas() { return canvas; }
+    /** The top canvas, which receives the mouse. */
+    public Canvas overlay() { return overlay; }
     /** Number of redraws so far (for tests). */
     public long redrawCount() { return redraws; }
     /** Vertices placed so far in drawing mode, {lon, lat}. */
@@ -117,6 +121,8 @@ public class MapCanvas extends Region {
             double cLon = view.lonAt(view.width() / 2), cLat = view.latAt(view.height() / 2);
             canvas.setWidth(w);
             canvas.setHeight(h);
+            overlay.setWidth(w);
+            overlay.setHeight(h);
             view.setSize(w, h);
             double dx = view.screenX(cLon) - w / 2, dy = view.screenY(cLat) - h / 2;
             view.pan(-dx, -dy);
@@ -127,7 +133,7 @@ public class MapCanvas extends Region {
     /** The current map as an image (for PNG export and tests). */
     public WritableImage snapshot() {
         redraw();
-        return canvas.snapshot(null, null);
+        return snapshot(null, null);
     }
 
     /**
@@ -161,9 +167,16 @@ public class MapCanvas extends Region {
             }
         }
         drawGraticule(g);
-        drawSketch(g);
         drawScaleBar(g);
         drawColourBar(g);
+        redrawOverlay();
+    }
+
+    /** Redraws only the overlay (the polygon being drawn). */
+    public void redrawOverlay() {
+        GraphicsContext o = overlay.getGraphicsContext2D();
+        o.clearRect(0, 0, overlay.getWidth(), overlay.getHeight());
+        drawSketch(o);
     }
 
     // ---- mouse ----
@@ -212,7 +225,7 @@ public class MapCanvas extends Region {
                 closeSketch();
             } else {
                 sketch.add(new double[] {lon, lat});
-                redraw();
+                redrawOverlay();
             }
             return;
         }
@@ -236,7 +249,7 @@ public class MapCanvas extends Region {
         double lon = view.lonAt(e.getX()), lat = view.latAt(e.getY());
         if (tool.get() == Tool.DRAW_POLYGON && !sketch.isEmpty()) {
             sketchCursor = new double[] {lon, lat};
-            requestRedraw();
+            redrawOverlay();
         }
         onHover.accept(lon, lat);
     }
@@ -256,7 +269,7 @@ public class MapCanvas extends Region {
         }
         sketch.clear();
         sketchCursor = null;
-        redraw();
+        redrawOverlay();
         if (pts.size() < 3) return;
         Coordinate[] cs = new Coordinate[pts.size() + 1];
         for (int k = 0; k < pts.size(); k++) cs[k] = new Coordinate(pts.get(k)[0], pts.get(k)[1]);

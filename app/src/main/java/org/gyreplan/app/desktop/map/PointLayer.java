@@ -92,7 +92,8 @@ public class PointLayer extends MapLayer {
         for (MapPoint p : points) {
             double x = view.screenX(p.lonDeg()), y = view.screenY(p.latDeg());
             if (x < -20 || y < -20 || x > view.width() + 20 || y > view.height() + 20) continue;
-            Color c = scale != null && Double.isFinite(p.value()) ? scale.color(p.value()) : colour;
+            double val = p.value(timeStep);
+            Color c = scale != null && Double.isFinite(val) ? scale.color(val) : colour;
             g.setFill(c);
             g.setStroke(Color.rgb(20, 20, 20));
             g.setLineWidth(1);
@@ -117,6 +118,13 @@ public class PointLayer extends MapLayer {
                 g.fillText(p.label(), x + 9, y - 5);
             }
         }
+    }
+
+    @Override
+    public int timeSteps() {
+        int n = 1;
+        for (MapPoint p : points) n = Math.max(n, p.steps());
+        return n;
     }
 
     @Override

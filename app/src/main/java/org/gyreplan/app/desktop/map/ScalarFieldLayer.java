@@ -29,7 +29,7 @@ public class ScalarFieldLayer extends MapLayer {
         double[] r = robustRange(this.frames);
         this.scale = new ColourScale(signed ? ColourScale.Kind.DIVERGING : ColourScale.Kind.SEQUENTIAL, r[0], r[1], opacity);
         ScalarField f = frames.get(0);
-        this.caption = f.longName() + " (" + f.units() + ")";
+        this.caption = title + " (" + f.units() + ")";
     }
 
     public ScalarField frame(int timeStep) { return frames.get(Math.max(0, Math.min(frames.size() - 1, timeStep))); }
@@ -46,7 +46,7 @@ public class ScalarFieldLayer extends MapLayer {
     @Override
     public List<Probe> probe(double lonDeg, double latDeg, int timeStep) {
         ScalarField f = frame(timeStep);
-        return List.of(new Probe(f.longName(), GridRaster.cellValue(f, lonDeg, latDeg), f.units()));
+        return List.of(new Probe(title(), GridRaster.cellValue(f, lonDeg, latDeg), f.units()));
     }
 
     /** Resets the colour range to the 2nd–98th percentile of all frames (robust to a few extreme cells). */

@@ -22,11 +22,18 @@ public final class MapStudy {
     public record Vector(String title, String quantity, List<VectorField> frames) { }
     /** An index point with its charts. */
     public record IndexPoint(String id, String label, double lonDeg, double latDeg, double value, String valueName,
-                             String units, PointSeries series) { }
+                             String units, PointSeries series, double[] stepValues) {
+        public IndexPoint(String id, String label, double lonDeg, double latDeg, double value, String valueName,
+                          String units, PointSeries series) {
+            this(id, label, lonDeg, latDeg, value, valueName, units, series, null);
+        }
+    }
 
     public String title = "Study";
     /** Labels of the time steps (e.g. "1985-03"); empty when nothing varies in time. */
     public final List<String> stepLabels = new ArrayList<>();
+    /** Representative instant of each step (for chart markers); empty or parallel to {@link #stepLabels}. */
+    public final List<java.time.Instant> stepTimes = new ArrayList<>();
     public final List<Geometry> land = new ArrayList<>();
     /** Sea-floor depth, m, positive downward; may be null. */
     public ScalarField depth;
@@ -37,6 +44,8 @@ public final class MapStudy {
     public final List<Geometry> upwellingZones = new ArrayList<>();
     public Geometry basin;
     public final List<Geometry> exclusions = new ArrayList<>();
+    /** Whether the basin or the exclusion zones were edited in the app (saved back to the scenario). */
+    public boolean basinEdited, exclusionsEdited;
     public final List<IndexPoint> indexPoints = new ArrayList<>();
     public final List<MapPoint> moorings = new ArrayList<>();
     public final List<MapPoint> stations = new ArrayList<>();

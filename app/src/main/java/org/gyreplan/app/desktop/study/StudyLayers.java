@@ -50,8 +50,11 @@ public final class StudyLayers {
         int z = 1;
         for (Geometry g : s.upwellingZones) zones.add(g, "Z" + z++);
         out.add(zones);
+        boolean firstVector = true;
         for (MapStudy.Vector v : s.vectors) {
             VectorLayer vl = new VectorLayer(v.title(), v.quantity(), v.frames(), Color.rgb(30, 30, 30, 0.85));
+            vl.setVisible(firstVector);                      // one arrow field at a time keeps the map legible
+            firstVector = false;
             out.add(vl);
         }
         PolygonLayer basin = new PolygonLayer(BASIN, "Basin", null, Color.rgb(20, 60, 160), 2.0, null);
@@ -76,8 +79,11 @@ public final class StudyLayers {
         double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
         String name = "Index", units = "";
         for (MapStudy.IndexPoint p : s.indexPoints) {
-            idx.add(new MapPoint(p.id(), p.label(), p.lonDeg(), p.latDeg(), p.value()));
+            MapPoint mp = new MapPoint(p.id(), p.label(), p.lonDeg(), p.latDeg(), p.value());
+            mp.setStepValues(p.stepValues());
+            idx.add(mp);
             if (Double.isFinite(p.value())) { lo = Math.min(lo, p.value()); hi = Math.max(hi, p.value()); }
+            if (p.stepValues() != null) for (double v : p.stepValues()) if (Double.isFinite(v)) { lo = Math.min(lo, v); hi = Math.max(hi, v); }
             name = p.valueName();
             units = p.units();
         }

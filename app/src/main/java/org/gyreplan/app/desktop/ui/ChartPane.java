@@ -28,6 +28,7 @@ public class ChartPane extends VBox {
     private final LineChart<Number, Number> climatology = chart("Monthly climatology", monthAxis());
     private final LineChart<Number, Number> cumulative = chart("Cumulative index and season", yearAxis());
     private final XYChart.Series<Number, Number> marker = new XYChart.Series<>();
+    private final HBox row;
     private PointSeries shown;
     private String shownId;
 
@@ -36,7 +37,9 @@ public class ChartPane extends VBox {
         setPadding(new Insets(4, 8, 4, 8));
         setSpacing(2);
         title.getStyleClass().add("panel-subtitle");
-        HBox row = new HBox(4, series, climatology, cumulative);
+        row = new HBox(4, series, climatology, cumulative);
+        row.setVisible(false);
+        row.setManaged(false);
         for (LineChart<Number, Number> c : List.of(series, climatology, cumulative)) HBox.setHgrow(c, Priority.ALWAYS);
         VBox.setVgrow(row, Priority.ALWAYS);
         getChildren().addAll(title, row);
@@ -53,6 +56,8 @@ public class ChartPane extends VBox {
     public void show(String id, String label, PointSeries s, int timeStep) {
         shown = s;
         shownId = id;
+        row.setVisible(true);
+        row.setManaged(true);
         title.setText(label + " — " + s.quantity() + " (" + s.units() + ")");
         series.getData().clear();
         climatology.getData().clear();
@@ -83,22 +88,36 @@ public class ChartPane extends VBox {
         if (s.cumulative().length > 0) {
             XYChart.Series<Number, Number> c = new XYChart.Series<>();
             c.setName("Cumulative index");
-            for (int k = 0; k < s.times().size(); k++) {
-                if (Double.isFinite(s.cumulative()[k])) c.getData().add(new XYChart.Data<>(year(s.times().get(k)), s.cumulative()[k]));
+            for (int k = 0; k < s.cumulativeTimes().size(); k++) {
+                if (Double.isFinite(s.cumulative()[k])) c.getData().add(new XYChart.Data<>(year(s.cumulativeTimes().get(k)), s.cumulative()[k]));
             }
             cumulative.getData().add(c);
             cumulative.getData().add(dates("Season start", s.seasonStarts(), s));
             cumulative.getData().add(dates("Season end", s.seasonEnds(), s));
-            fitYearAxis(cumulative, s.times());
+            fitYearAxis(cumulative, s.cumulativeTimes());
         }
     }
 
-    /** Moves the "this step" marker (series chart) to a time step. */
+    private java.util.function.IntFunction<Instant> stepTime = k -> null;
+
+    /** How a time step maps to an instant (null = the step indexes the series directly). */
+    public void setStepTimes(java.util.function.IntFunction<Instant> f) { stepTime = f == null ? k -> null : f; }
+
+    /** Moves the "this step" marker (series chart) to a time step: the series value nearest the step's time. */
     public void setTimeStep(int timeStep) {
         if (shown == null) return;
         marker.getData().clear();
-        if (timeStep >= 0 && timeStep < shown.times().size() && Double.isFinite(shown.values()[timeStep])) {
-            marker.getData().add(new XYChart.Data<>(year(shown.times().get(timeStep)), shown.values()[timeStep]));
+        int k = timeStep;
+        Instant t = stepTime.apply(timeStep);
+        if (t != null) {
+            k = 0;
+            for (int q = 1; q < shown.times().size(); q++) {
+                if (Math.abs(shown.times().get(q).getEpochSecond() - t.getEpochSecond())
+                        < Math.abs(shown.times().get(k).getEpochSecond() - t.getEpochSecond())) k = q;
+            }
+        }
+        if (k >= 0 && k < shown.times().size() && Double.isFinite(shown.values()[k])) {
+            marker.getData().add(new XYChart.Data<>(year(shown.times().get(k)), shown.values()[k]));
         }
     }
 
@@ -112,12 +131,13 @@ public class ChartPane extends VBox {
         out.setName(name);
         for (Instant t : when) {
             // mark on the cumulative curve at the nearest time
+            List<Instant> ct = s.cumulativeTimes();
             int best = 0;
-            for (int k = 1; k < s.times().size(); k++) {
-                if (Math.abs(s.times().get(k).getEpochSecond() - t.getEpochSecond())
-                        < Math.abs(s.times().get(best).getEpochSecond() - t.getEpochSecond())) best = k;
+            for (int k = 1; k < ct.size(); k++) {
+                if (Math.abs(ct.get(k).getEpochSecond() - t.getEpochSecond())
+                        < Math.abs(ct.get(best).getEpochSecond() - t.getEpochSecond())) best = k;
             }
-            if (!s.times().isEmpty() && Double.isFinite(s.cumulative()[best])) {
+            if (!ct.isEmpty() && Double.isFinite(s.cumulative()[best])) {
                 out.getData().add(new XYChart.Data<>(year(t), s.cumulative()[best]));
             }
         }

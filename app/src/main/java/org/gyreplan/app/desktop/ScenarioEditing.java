@@ -5,7 +5,7 @@ import org.gyreplan.app.desktop.study.MapStudy;
 import java.nio.file.Path;
 
 /** Reads a scenario's geometry for display before a run, and writes edits back to the scenario file. */
-public interface ScenarioFiles {
+public interface ScenarioEditing {
     /** What can be shown before running (basin, sites, stations…), or null. */
     MapStudy preview(Path scenario) throws Exception;
 
