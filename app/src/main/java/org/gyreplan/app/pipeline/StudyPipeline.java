@@ -185,10 +185,6 @@ public final class StudyPipeline {
         Path file = s.resolve(s.winds.file);
         DragLaw law = dragLaw(s);
         st.dragLaw = law;
-        if (s.winds.source == Scenario.WindSourceKind.STATION) {
-            throw new StudyException(file, "winds.source", "station winds are not wired into the run in this build;"
-                    + " use a gridded or pressure source");
-        }
         Envelope e = st.basin.envelope();
         // one degree of margin so that the coast and the derivatives next to it have data on both sides
         BoundingBox box = new BoundingBox(e.getMinX() - 1, e.getMaxX() + 1, Math.max(-90, e.getMinY() - 1), Math.min(90, e.getMaxY() + 1));
@@ -197,20 +193,24 @@ public final class StudyPipeline {
         VariableMapping mapping = mapping(s);
         boolean pressure = s.winds.source == Scenario.WindSourceKind.PRESSURE;
         st.progress.progress("winds", 0.0, "opening " + file.getFileName());
-        try (GriddedSeries whole = pressure
-                ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, BoundingBox.world(), from, to)
-                : GriddedSeries.openWind(file, mapping, BoundingBox.world(), from, to)) {
-            checkCoverage(st, whole.grid(), e, file);
-        } catch (IllegalArgumentException ex) {
-            throw new StudyException(file, "winds", ex.getMessage(), ex);
-        } catch (IOException ex) {
-            throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
+        boolean station = s.winds.source == Scenario.WindSourceKind.STATION;
+        if (!station) {
+            try (GriddedSeries whole = pressure
+                    ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, BoundingBox.world(), from, to)
+                    : GriddedSeries.openWind(file, mapping, BoundingBox.world(), from, to)) {
+                checkCoverage(st, whole.grid(), e, file);
+            } catch (IllegalArgumentException ex) {
+                throw new StudyException(file, "winds", ex.getMessage(), ex);
+            } catch (IOException ex) {
+                throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
+            }
         }
-        try (GriddedSeries series = pressure
-                ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, box, from, to)
-                : GriddedSeries.openWind(file, mapping, box, from, to)) {
+        double[] b = st.studyBox;
+        try (WindSteps series = station
+                ? WindSteps.station(file, LonLatGrid.covering(b[0], b[1], b[2], b[3], s.grid.spacingDeg, st.constants.earthRadius()), from, to)
+                : WindSteps.gridded(file, mapping, box, from, to, pressure, st.constants, st.cutoff)) {
             LonLatGrid raw = series.grid();
-            checkCoverage(st, raw, e, file);
+            if (!station) checkCoverage(st, raw, e, file);
             LonLatGrid g = st.basin.mask(raw);
             if (g.oceanCount() == 0) {
                 throw new StudyException(file, "basin", "no wind-grid cell centre lies inside the basin; the wind grid ("
@@ -231,16 +231,8 @@ public final class StudyPipeline {
             double[] portWind = portCell >= 0 ? new double[nt] : null;
             for (int k = 0; k < nt; k++) {
                 st.cancel.check();
-                GriddedSeries.Step step = series.read(k);
-                times[k] = step.time() != null ? step.time() : Instant.EPOCH.plusSeconds(86400L * k);
-                VectorField wind;
-                if (pressure) {
-                    ScalarField p = on(g, step.fields().get(0));
-                    VectorField geo = GeostrophicWind.field(p, st.constants, st.cutoff).wind();
-                    wind = SurfaceWindFromGeostrophic.DEFAULT.apply(geo);
-                } else {
-                    wind = new VectorField(on(g, step.fields().get(0)), on(g, step.fields().get(1)));
-                }
+                times[k] = series.time(k);
+                VectorField wind = series.wind(k, g);
                 if (portWind != null) portWind[k] = wind.magnitude(portCell);
                 SurfaceResponse.Step r = response.fromWind(wind);
                 acc.add(wind, r);
@@ -295,10 +287,10 @@ public final class StudyPipeline {
             st.provenanceExtra.put("wind grid", raw.nx() + " × " + raw.ny() + " cells of " + raw.dLonDeg() + "° × "
                     + raw.dLatDeg() + "°, " + g.oceanCount() + " inside the basin");
             st.provenanceExtra.put("time steps", nt + " (" + times[0] + " to " + times[nt - 1] + ")");
-            st.provenanceExtra.put("wind variables", String.join(", ", series.variables().stream().map(v -> v.name()).toList()));
-            if (pressure) {
-                st.provenanceExtra.put("surface wind from pressure", "geostrophic wind × " + SurfaceWindFromGeostrophic.DEFAULT.reductionFactor()
-                        + ", turned " + SurfaceWindFromGeostrophic.DEFAULT.turningAngleDeg() + "° toward low pressure");
+            st.provenanceExtra.put("wind input", series.describe());
+            if (station) {
+                st.warn(RunWarning.Kind.OTHER, "station winds are applied uniformly over the basin; curl-driven results (Ekman"
+                        + " pumping, upwelling zones, the gyre) then reflect no real wind-stress curl: use this run for the coastal index");
             }
         } catch (IllegalArgumentException ex) {
             throw new StudyException(file, "winds", ex.getMessage(), ex);
