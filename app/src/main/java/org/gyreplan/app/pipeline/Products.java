@@ -92,8 +92,25 @@ final class Products {
 
     // ------------------------------------------------------------------------------------------- maps
 
+    private List<List<double[]>> landRings;
+
+    /** Natural Earth land (1:50 m) inside the map extent, for context around the basin; empty if none. */
+    private List<List<double[]>> land(LonLatGrid g) {
+        if (landRings != null) return landRings;
+        landRings = new ArrayList<>();
+        try {
+            Geometry land = org.gyreplan.gisdata.basemap.LandPolygons.clip(org.gyreplan.gisdata.basemap.LandPolygons.Resolution.MEDIUM_50M,
+                    g.westDeg() - 1, g.southDeg() - 1, g.eastDeg() + 1, g.northDeg() + 1);
+            if (land != null && !land.isEmpty()) landRings.addAll(rings(land));
+        } catch (RuntimeException e) {
+            st.warn(RunWarning.Kind.PRODUCT, "base-map land not drawn: " + GyreplanText.oneLine(e));
+        }
+        return landRings;
+    }
+
     private MapRenderer.MapSpec base(ScalarField f, String title, String subtitle) {
         MapRenderer.MapSpec m = MapRenderer.MapSpec.of(f, title).subtitle(subtitle);
+        for (List<double[]> ring : land(f.grid())) m.land(ring);
         for (List<double[]> ring : st.basin.rings()) m.coastline(ring);
         ScalarField depth = (ScalarField) st.products.get(Planning.DEPTH);
         if (depth != null) m.shading(negate(depth));
