@@ -570,7 +570,7 @@ final class Products {
             h.append("<p>Coastal upwelling index: cross-shore Ekman transport, positive offshore (upwelling), in m³ s⁻¹ per 100 m")
                     .append(" of coastline. Spring transition: day of the minimum of the cumulative index from 1 January; end of")
                     .append(" season: day of its maximum (Bograd et al. 2009).</p>");
-            h.append("<table class=\"num\"><thead><tr><th>Point</th><th>Position</th><th>Offshore bearing</th><th>Mean index</th>")
+            h.append("<table><thead><tr><th>Point</th><th>Position</th><th>Offshore bearing</th><th>Mean index</th>")
                     .append("<th>Peak month</th><th>Year</th><th>Spring transition</th><th>End of season</th><th>Length (days)</th></tr></thead><tbody>");
             List<StudyPipeline.CoastSeries> all = new ArrayList<>(st.coastSeries);
             if (cm != null) all.add(cm);
@@ -677,8 +677,9 @@ final class Products {
                         .append("<tr><th>Total</th><td>").append(ReportWriter.number(sc.totalDays())).append(" days; with ")
                         .append(ReportWriter.number(cont)).append(" % contingency ").append(ReportWriter.number(sc.totalDays() * (1 + cont / 100)))
                         .append(" days</td></tr><tr><th>Return</th><td>").append(sc.returnTime()).append("</td></tr></tbody></table><ul>");
-                for (String c : sc.cautions()) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
-                for (String c : route.cautions()) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
+                java.util.Set<String> notes = new java.util.LinkedHashSet<>(sc.cautions());
+                notes.addAll(route.cautions());
+                for (String c : notes) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
                 h.append("</ul><p>Full leg table: <code>plan/cruise_schedule.csv</code>; track: <code>plan/plan.gpx</code>, <code>plan/plan.kml</code>.</p>");
             }
             report.section(new ReportWriter.Section("plan", "Zones, moorings and survey plan", h.toString()));
