@@ -118,6 +118,15 @@ class ScenarioFilesTest {
     }
 
     @Test
+    void unknownDragLawListsTheSolversLaws() throws IOException {
+        ScenarioProblem p = single(VALID.replace("name: large-pond-1981", "name: large-pond"));
+        assertEquals("dragLaw.name", p.key());
+        assertEquals(11, p.line());
+        assertTrue(p.message().contains("large-pond-1981") && p.message().contains("large-yeager-2004")
+                && p.message().contains("constant"), p.message());
+    }
+
+    @Test
     void missingWindFileIsNamed() throws IOException {
         ScenarioProblem p = single(VALID.replace("file: winds.nc", "file: nowhere.nc"));
         assertEquals("winds.file", p.key());
