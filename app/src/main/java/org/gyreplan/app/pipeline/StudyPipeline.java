@@ -390,9 +390,9 @@ public final class StudyPipeline {
         boolean inside = e.getMinX() >= w - tolLon && e.getMaxX() <= east + tolLon && e.getMinY() >= s - tolLat && e.getMaxY() <= n + tolLat;
         if (!inside) {
             throw new StudyException(file, "basin", String.format(Locale.ROOT,
-                    "the basin (lon %.2f…%.2f°, lat %.2f…%.2f°) extends outside the wind data (cell centres lon %.2f…%.2f°, lat %.2f…%.2f°);"
+                    "the basin (%s; lon %.2f…%.2f°, lat %.2f…%.2f°) extends outside the wind data (cell centres lon %.2f…%.2f°, lat %.2f…%.2f°);"
                             + " use wind data that cover the basin or a smaller basin",
-                    e.getMinX(), e.getMaxX(), e.getMinY(), e.getMaxY(), w, east, s, n));
+                    st.scenario.where("/basin"), e.getMinX(), e.getMaxX(), e.getMinY(), e.getMaxY(), w, east, s, n));
         }
     }
 

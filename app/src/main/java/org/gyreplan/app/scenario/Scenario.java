@@ -32,6 +32,15 @@ public final class Scenario {
     @JsonIgnore public Path baseDir = Path.of(".");
     /** The scenario file this was read from, or null when built in memory; not written to YAML. */
     @JsonIgnore public Path sourceFile;
+    /** Line of each key in the file (JSON pointer such as {@code /basin/polygon} → 1-based line); empty in memory. */
+    @JsonIgnore public java.util.Map<String, Integer> keyLines = new java.util.HashMap<>();
+
+    /** "file:line" of a key (JSON pointer, e.g. {@code /basin}) for messages, or the file alone, or "scenario". */
+    public String where(String pointer) {
+        String f = sourceFile == null ? "scenario" : sourceFile.toString();
+        Integer line = keyLines.get(pointer);
+        return line == null ? f : f + ":" + line;
+    }
 
     public Study study = new Study();
     public Basin basin = new Basin();

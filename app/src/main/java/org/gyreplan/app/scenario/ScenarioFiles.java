@@ -93,6 +93,7 @@ public final class ScenarioFiles {
         }
         s.baseDir = baseDir == null ? Path.of(".").toAbsolutePath() : baseDir;
         s.sourceFile = file;
+        for (Map.Entry<String, JsonLocation> e : where.entrySet()) s.keyLines.put(e.getKey(), e.getValue().getLineNr());
         List<ScenarioProblem> problems = ScenarioValidator.validate(s, pointer -> lookup(where, pointer), file);
         if (!problems.isEmpty()) throw new ScenarioException(problems);
         return s;

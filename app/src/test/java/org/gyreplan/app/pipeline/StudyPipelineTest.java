@@ -69,6 +69,7 @@ class StudyPipelineTest {
         StudyException e = assertThrows(StudyException.class,
                 () -> new StudyPipeline().run(ScenarioFiles.load(s), dir.resolve("out"), null, null));
         assertTrue(e.getMessage().contains("outside the wind data") && e.getMessage().contains("winds.nc"), e.getMessage());
+        assertTrue(e.getMessage().contains(s + ":2"), "names the scenario line of 'basin': " + e.getMessage());
         assertFalse(Files.exists(dir.resolve("out")) && Files.list(dir.resolve("out")).findAny().isPresent());
     }
 
