@@ -48,6 +48,9 @@ public final class GyreplanCommand implements Runnable {
     }
 
     public static void main(String[] args) {
+        // the SQLite driver (GeoPackage output) logs through SLF4J; without a logging back end SLF4J prints a
+        // three-line notice on every run, which is noise on a command line
+        if (System.getProperty("slf4j.internal.verbosity") == null) System.setProperty("slf4j.internal.verbosity", "ERROR");
         System.exit(commandLine().execute(args));
     }
 
