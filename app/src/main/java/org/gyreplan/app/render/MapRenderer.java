@@ -132,8 +132,9 @@ public final class MapRenderer {
         // field cells (land and missing drawn as land colour; the basin mask decides), clipped to the coastline
         gr.setColor(LAND);
         gr.fillRect(left, top, pw, ph);
+        Path2D basin = null;
         if (!m.coast.isEmpty()) {
-            Path2D basin = new Path2D.Double(Path2D.WIND_EVEN_ODD);
+            basin = new Path2D.Double(Path2D.WIND_EVEN_ODD);
             for (List<double[]> ring : m.coast) basin.append(p.path(ring, true), false);
             gr.setClip(basin);
         }
@@ -184,7 +185,8 @@ public final class MapRenderer {
                 if (j < fg.ny() - 1 && !fg.isOcean(i, j + 1)) gr.draw(new Line2D.Double(p.x(lw), p.y(ln), p.x(le), p.y(ln)));
             }
         }
-        // contours
+        // contours and arrows stay inside the coastline
+        if (basin != null) gr.setClip(basin);
         if (m.contours != null && m.contourLevels != null) {
             for (double level : m.contourLevels) {
                 boolean negative = level < 0;
@@ -202,7 +204,8 @@ public final class MapRenderer {
             arrowPx = 34;
             drawArrows(gr, p, m.arrows, m.arrowReference, arrowPx);
         }
-        // overlays
+        // overlays (may lie on the coast or on land: port, exclusion zones)
+        gr.setClip(left, top, pw, plotH);
         for (Overlay o : m.overlays) drawOverlay(gr, p, o);
         gr.setClip(null);
 
