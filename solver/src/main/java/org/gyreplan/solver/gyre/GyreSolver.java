@@ -257,6 +257,10 @@ public final class GyreSolver {
         return cosWeighted == null ? x : x * geom.cosFactor(g.latDeg(j));
     }
 
+    /**
+     * Warns when the western boundary layer spans fewer than 3 cells of Δx at some row of the main basin. With both
+     * frictions the wider of δ_S = r/β and δ_M = (A_H/β)^(1/3) sets the layer (the narrower one is then irrelevant).
+     */
     private static void resolutionGuard(GyreProblem p, GyreOperator op, List<String> warnings) {
         LonLatGrid g = p.grid();
         double worst = Double.POSITIVE_INFINITY, worstLat = Double.NaN, worstWidth = Double.NaN, worstDx = Double.NaN;
