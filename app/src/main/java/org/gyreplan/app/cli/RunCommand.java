@@ -105,6 +105,12 @@ public final class RunCommand implements Callable<Integer> {
             return GyreplanCommand.EXIT_INPUT;
         } catch (Exception e) {
             if (printer != null) printer.finish();
+            if (cancel.isCancelled()) {
+                // interrupted by Ctrl-C while the JVM shuts down: the staged outputs were discarded
+                err.println("gyreplan: cancelled; no outputs were written");
+                err.flush();
+                return GyreplanCommand.EXIT_CANCELLED;
+            }
             err.println("gyreplan: run failed: " + GyreplanCommand.oneLine(e));
             err.flush();
             return 1;

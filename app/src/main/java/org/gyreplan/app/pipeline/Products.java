@@ -92,8 +92,25 @@ final class Products {
 
     // ------------------------------------------------------------------------------------------- maps
 
+    private List<List<double[]>> landRings;
+
+    /** Natural Earth land (1:50 m) inside the map extent, for context around the basin; empty if none. */
+    private List<List<double[]>> land(LonLatGrid g) {
+        if (landRings != null) return landRings;
+        landRings = new ArrayList<>();
+        try {
+            Geometry land = org.gyreplan.gisdata.basemap.LandPolygons.clip(org.gyreplan.gisdata.basemap.LandPolygons.Resolution.MEDIUM_50M,
+                    g.westDeg() - 1, g.southDeg() - 1, g.eastDeg() + 1, g.northDeg() + 1);
+            if (land != null && !land.isEmpty()) landRings.addAll(rings(land));
+        } catch (RuntimeException e) {
+            st.warn(RunWarning.Kind.PRODUCT, "base-map land not drawn: " + GyreplanText.oneLine(e));
+        }
+        return landRings;
+    }
+
     private MapRenderer.MapSpec base(ScalarField f, String title, String subtitle) {
         MapRenderer.MapSpec m = MapRenderer.MapSpec.of(f, title).subtitle(subtitle);
+        for (List<double[]> ring : land(f.grid())) m.land(ring);
         for (List<double[]> ring : st.basin.rings()) m.coastline(ring);
         ScalarField depth = (ScalarField) st.products.get(Planning.DEPTH);
         if (depth != null) m.shading(negate(depth));
@@ -553,7 +570,7 @@ final class Products {
             h.append("<p>Coastal upwelling index: cross-shore Ekman transport, positive offshore (upwelling), in m³ s⁻¹ per 100 m")
                     .append(" of coastline. Spring transition: day of the minimum of the cumulative index from 1 January; end of")
                     .append(" season: day of its maximum (Bograd et al. 2009).</p>");
-            h.append("<table class=\"num\"><thead><tr><th>Point</th><th>Position</th><th>Offshore bearing</th><th>Mean index</th>")
+            h.append("<table><thead><tr><th>Point</th><th>Position</th><th>Offshore bearing</th><th>Mean index</th>")
                     .append("<th>Peak month</th><th>Year</th><th>Spring transition</th><th>End of season</th><th>Length (days)</th></tr></thead><tbody>");
             List<StudyPipeline.CoastSeries> all = new ArrayList<>(st.coastSeries);
             if (cm != null) all.add(cm);
@@ -660,8 +677,9 @@ final class Products {
                         .append("<tr><th>Total</th><td>").append(ReportWriter.number(sc.totalDays())).append(" days; with ")
                         .append(ReportWriter.number(cont)).append(" % contingency ").append(ReportWriter.number(sc.totalDays() * (1 + cont / 100)))
                         .append(" days</td></tr><tr><th>Return</th><td>").append(sc.returnTime()).append("</td></tr></tbody></table><ul>");
-                for (String c : sc.cautions()) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
-                for (String c : route.cautions()) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
+                java.util.Set<String> notes = new java.util.LinkedHashSet<>(sc.cautions());
+                notes.addAll(route.cautions());
+                for (String c : notes) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
                 h.append("</ul><p>Full leg table: <code>plan/cruise_schedule.csv</code>; track: <code>plan/plan.gpx</code>, <code>plan/plan.kml</code>.</p>");
             }
             report.section(new ReportWriter.Section("plan", "Zones, moorings and survey plan", h.toString()));

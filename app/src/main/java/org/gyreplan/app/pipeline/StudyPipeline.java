@@ -185,10 +185,6 @@ public final class StudyPipeline {
         Path file = s.resolve(s.winds.file);
         DragLaw law = dragLaw(s);
         st.dragLaw = law;
-        if (s.winds.source == Scenario.WindSourceKind.STATION) {
-            throw new StudyException(file, "winds.source", "station winds are not wired into the run in this build;"
-                    + " use a gridded or pressure source");
-        }
         Envelope e = st.basin.envelope();
         // one degree of margin so that the coast and the derivatives next to it have data on both sides
         BoundingBox box = new BoundingBox(e.getMinX() - 1, e.getMaxX() + 1, Math.max(-90, e.getMinY() - 1), Math.min(90, e.getMaxY() + 1));
@@ -197,20 +193,24 @@ public final class StudyPipeline {
         VariableMapping mapping = mapping(s);
         boolean pressure = s.winds.source == Scenario.WindSourceKind.PRESSURE;
         st.progress.progress("winds", 0.0, "opening " + file.getFileName());
-        try (GriddedSeries whole = pressure
-                ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, BoundingBox.world(), from, to)
-                : GriddedSeries.openWind(file, mapping, BoundingBox.world(), from, to)) {
-            checkCoverage(st, whole.grid(), e, file);
-        } catch (IllegalArgumentException ex) {
-            throw new StudyException(file, "winds", ex.getMessage(), ex);
-        } catch (IOException ex) {
-            throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
+        boolean station = s.winds.source == Scenario.WindSourceKind.STATION;
+        if (!station) {
+            try (GriddedSeries whole = pressure
+                    ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, BoundingBox.world(), from, to)
+                    : GriddedSeries.openWind(file, mapping, BoundingBox.world(), from, to)) {
+                checkCoverage(st, whole.grid(), e, file);
+            } catch (IllegalArgumentException ex) {
+                throw new StudyException(file, "winds", ex.getMessage(), ex);
+            } catch (IOException ex) {
+                throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
+            }
         }
-        try (GriddedSeries series = pressure
-                ? GriddedSeries.open(file, List.of(VariableRole.SEA_LEVEL_PRESSURE), mapping, box, from, to)
-                : GriddedSeries.openWind(file, mapping, box, from, to)) {
+        double[] b = st.studyBox;
+        try (WindSteps series = station
+                ? WindSteps.station(file, LonLatGrid.covering(b[0], b[1], b[2], b[3], s.grid.spacingDeg, st.constants.earthRadius()), from, to)
+                : WindSteps.gridded(file, mapping, box, from, to, pressure, st.constants, st.cutoff)) {
             LonLatGrid raw = series.grid();
-            checkCoverage(st, raw, e, file);
+            if (!station) checkCoverage(st, raw, e, file);
             LonLatGrid g = st.basin.mask(raw);
             if (g.oceanCount() == 0) {
                 throw new StudyException(file, "basin", "no wind-grid cell centre lies inside the basin; the wind grid ("
@@ -231,16 +231,8 @@ public final class StudyPipeline {
             double[] portWind = portCell >= 0 ? new double[nt] : null;
             for (int k = 0; k < nt; k++) {
                 st.cancel.check();
-                GriddedSeries.Step step = series.read(k);
-                times[k] = step.time() != null ? step.time() : Instant.EPOCH.plusSeconds(86400L * k);
-                VectorField wind;
-                if (pressure) {
-                    ScalarField p = on(g, step.fields().get(0));
-                    VectorField geo = GeostrophicWind.field(p, st.constants, st.cutoff).wind();
-                    wind = SurfaceWindFromGeostrophic.DEFAULT.apply(geo);
-                } else {
-                    wind = new VectorField(on(g, step.fields().get(0)), on(g, step.fields().get(1)));
-                }
+                times[k] = series.time(k);
+                VectorField wind = series.wind(k, g);
                 if (portWind != null) portWind[k] = wind.magnitude(portCell);
                 SurfaceResponse.Step r = response.fromWind(wind);
                 acc.add(wind, r);
@@ -295,10 +287,10 @@ public final class StudyPipeline {
             st.provenanceExtra.put("wind grid", raw.nx() + " × " + raw.ny() + " cells of " + raw.dLonDeg() + "° × "
                     + raw.dLatDeg() + "°, " + g.oceanCount() + " inside the basin");
             st.provenanceExtra.put("time steps", nt + " (" + times[0] + " to " + times[nt - 1] + ")");
-            st.provenanceExtra.put("wind variables", String.join(", ", series.variables().stream().map(v -> v.name()).toList()));
-            if (pressure) {
-                st.provenanceExtra.put("surface wind from pressure", "geostrophic wind × " + SurfaceWindFromGeostrophic.DEFAULT.reductionFactor()
-                        + ", turned " + SurfaceWindFromGeostrophic.DEFAULT.turningAngleDeg() + "° toward low pressure");
+            st.provenanceExtra.put("wind input", series.describe());
+            if (station) {
+                st.warn(RunWarning.Kind.OTHER, "station winds are applied uniformly over the basin; curl-driven results (Ekman"
+                        + " pumping, upwelling zones, the gyre) then reflect no real wind-stress curl: use this run for the coastal index");
             }
         } catch (IllegalArgumentException ex) {
             throw new StudyException(file, "winds", ex.getMessage(), ex);
@@ -306,6 +298,45 @@ public final class StudyPipeline {
             if (ex instanceof java.nio.file.NoSuchFileException) throw ex;
             throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
         }
+    }
+
+    /**
+     * Removes one-cell spurs of the mask: ocean cells with neither an east nor a west ocean neighbour, or neither a
+     * north nor a south one, where a centred derivative (and so the stress curl) has no data. Repeats until stable.
+     */
+    static LonLatGrid trimSpurs(LonLatGrid g, int[] count) {
+        boolean[] ocean = g.oceanMask();
+        boolean changed = true;
+        while (changed) {
+            changed = false;
+            for (int j = 0; j < g.ny(); j++) {
+                for (int i = 0; i < g.nx(); i++) {
+                    int k = g.index(i, j);
+                    if (!ocean[k]) continue;
+                    boolean ew = (i > 0 && ocean[k - 1]) || (i < g.nx() - 1 && ocean[k + 1]);
+                    boolean ns = (j > 0 && ocean[k - g.nx()]) || (j < g.ny() - 1 && ocean[k + g.nx()]);
+                    if (!ew || !ns) { ocean[k] = false; count[0]++; changed = true; }
+                }
+            }
+        }
+        return count[0] == 0 ? g : g.withOcean(ocean);
+    }
+
+    /** Flat index of the wind cell with finite values nearest to a position (grid distance), or −1. */
+    static int nearestFinite(LonLatGrid g, double[] a, double[] b, double lonDeg, double latDeg) {
+        double x = g.columnOf(lonDeg), y = g.rowOf(latDeg);
+        double c = Math.cos(Math.toRadians(latDeg)) * g.dLonDeg() / g.dLatDeg();
+        int best = -1;
+        double bd = Double.POSITIVE_INFINITY;
+        for (int j = 0; j < g.ny(); j++) {
+            for (int i = 0; i < g.nx(); i++) {
+                int k = g.index(i, j);
+                if (!(Double.isFinite(a[k]) && Double.isFinite(b[k]))) continue;
+                double dd = Math.hypot((i - x) * c, j - y);
+                if (dd < bd) { bd = dd; best = k; }
+            }
+        }
+        return best;
     }
 
     /** Flat index of the ocean cell nearest to a position (by grid distance), or −1 if the grid has none. */
@@ -371,16 +402,34 @@ public final class StudyPipeline {
         double d = s.gyre.spacingDeg != null ? s.gyre.spacingDeg : s.grid.spacingDeg;
         double[] b = st.studyBox;
         LonLatGrid g = st.basin.mask(LonLatGrid.covering(b[0], b[1], b[2], b[3], d, st.constants.earthRadius()));
+        int[] trimmed = new int[1];
+        g = trimSpurs(g, trimmed);
+        if (trimmed[0] > 0) {
+            st.warn(RunWarning.Kind.GEOMETRY, trimmed[0] + " gyre-grid ocean cells with no ocean neighbour to the east or west,"
+                    + " or to the north or south (corners of the coast polygon), were treated as land so that the stress curl is defined");
+        }
         st.grid = g;
         VectorField tauWind = st.vectors.get("stress");
         double[] tx = new double[g.size()], ty = new double[g.size()];
+        int filled = 0;
+        LonLatGrid wg = tauWind.grid();
+        double[] wx = tauWind.eastward().values(), wy = tauWind.northward().values();
         for (int j = 0; j < g.ny(); j++) {
             for (int i = 0; i < g.nx(); i++) {
                 int k = g.index(i, j);
                 boolean ocean = g.isOcean(k);
                 tx[k] = ocean ? tauWind.eastward().interpolate(g.lonDeg(i), g.latDeg(j)) : Double.NaN;
                 ty[k] = ocean ? tauWind.northward().interpolate(g.lonDeg(i), g.latDeg(j)) : Double.NaN;
+                if (ocean && !(Double.isFinite(tx[k]) && Double.isFinite(ty[k]))) {
+                    // the gyre grid reaches closer to the coast than the wind grid: take the nearest wind cell with data
+                    int n = nearestFinite(wg, wx, wy, g.lonDeg(i), g.latDeg(j));
+                    if (n >= 0) { tx[k] = wx[n]; ty[k] = wy[n]; filled++; }
+                }
             }
+        }
+        if (filled > 0) {
+            st.warn(RunWarning.Kind.RESOLUTION, filled + " gyre-grid cells next to the coast lie between wind-grid cell centres;"
+                    + " they take the mean stress of the nearest wind cell (" + wg.dLonDeg() + "° wind grid, " + d + "° gyre grid)");
         }
         VectorField tau = new VectorField(new ScalarField(g, tx, tauWind.eastward().name(), "Pa", tauWind.eastward().longName()),
                 new ScalarField(g, ty, tauWind.northward().name(), "Pa", tauWind.northward().longName()));

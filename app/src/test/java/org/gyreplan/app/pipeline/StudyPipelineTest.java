@@ -23,6 +23,37 @@ class StudyPipelineTest {
     }
 
     @Test
+    void stationWindsGiveTheAnalyticCoastalIndex() throws Exception {
+        // 10 m/s northerly (from 0°, blowing southward) along a north-south east coast at 36°N, ocean to the west,
+        // drag constant 1.3e-3, rho_a 1.22: tau = 0.1586 Pa equatorward, index 180.50 (CHECKS UI-05, 36°N).
+        StringBuilder csv = new StringBuilder("time,speed [m/s],direction [deg]\n");
+        for (int d = 1; d <= 5; d++) csv.append(String.format("2021-07-%02dT00:00:00Z,10,0%n", d));
+        Files.writeString(dir.resolve("station.csv"), csv.toString());
+        Path sf = dir.resolve("station.yaml");
+        Files.writeString(sf, """
+                study: {name: Station test}
+                basin:
+                  coordinates: [[-134, 30], [-124, 30], [-124, 42], [-134, 42]]
+                winds:
+                  source: station
+                  file: station.csv
+                  station: {name: Buoy, lonDeg: -125, latDeg: 36}
+                dragLaw: {name: constant, dragCoefficient: 0.0013}
+                gyre: {model: stommel, bottomFriction: 1.0e-5, depth: 1000}
+                grid: {spacingDeg: 0.5}
+                coast:
+                  points: [{name: East Coast 36N, lonDeg: -124, latDeg: 36}]
+                  smoothingKm: 50
+                outputs: [csv]
+                """);
+        StudyResult r = new StudyPipeline().run(ScenarioFiles.load(sf), dir.resolve("out"), null, null);
+        assertEquals(5.0, r.headlines().get(org.gyreplan.app.scenario.Headline.TIME_STEPS));
+        double ui = r.series().get(0).values()[0];
+        assertEquals(180.50, ui, 180.50 * 2e-3, "UI-05 at 36°N; tolerance covers the coast-orientation smoothing");
+        assertTrue(r.warnings().stream().anyMatch(w -> w.message().contains("station winds")));
+    }
+
+    @Test
     void sha256OfAKnownText() throws Exception {
         Path f = dir.resolve("abc.txt");
         Files.writeString(f, "abc");
