@@ -368,6 +368,7 @@ public class MainWindow extends BorderPane {
             finishRun();
             setStudy(t.getValue());
             status.setText("Study finished" + (study.warnings.isEmpty() ? "" : " with " + study.warnings.size() + " warning(s)"));
+            System.err.println("gyreplan desktop: " + status.getText());
         });
         t.setOnCancelled(e -> { finishRun(); status.setText("Run cancelled"); });
         t.setOnFailed(e -> {
@@ -425,6 +426,7 @@ public class MainWindow extends BorderPane {
     /** Shows a readable error in the status bar, the messages list and (unless turned off) a dialog. */
     public void error(String what, Throwable ex) {
         String text = what + (ex == null ? "" : ": " + describe(ex));
+        System.err.println("gyreplan desktop: " + text);
         status.setText(text);
         messages.getItems().add(0, "Error — " + text);
         rightTabs.getTabs().get(2).setText("Messages (" + messages.getItems().size() + ")");
@@ -462,10 +464,12 @@ public class MainWindow extends BorderPane {
         png.setOnAction(e -> choosePng());
         MenuItem outputs = new MenuItem("Show study outputs");
         outputs.setOnAction(e -> showOutputs());
+        MenuItem copyOut = new MenuItem("Export study outputs to folder…");
+        copyOut.setOnAction(e -> chooseOutputCopy());
         MenuItem quit = new MenuItem("Quit");
         quit.setOnAction(e -> Platform.exit());
         Menu file = new Menu("File", null, open, save, new javafx.scene.control.SeparatorMenuItem(), importBasin, importExcl,
-                new javafx.scene.control.SeparatorMenuItem(), png, outputs, new javafx.scene.control.SeparatorMenuItem(), quit);
+                new javafx.scene.control.SeparatorMenuItem(), png, outputs, copyOut, new javafx.scene.control.SeparatorMenuItem(), quit);
         MenuItem run = new MenuItem("Run study");
         run.setOnAction(e -> runStudy());
         MenuItem cancel = new MenuItem("Cancel run");
@@ -595,6 +599,40 @@ public class MainWindow extends BorderPane {
         } catch (IOException ex) {
             error("Could not write " + f, ex);
         }
+    }
+
+    private void chooseOutputCopy() {
+        if (study.outputs.isEmpty()) {
+            error("No outputs yet: run the study first.", null);
+            return;
+        }
+        javafx.stage.DirectoryChooser dc = new javafx.stage.DirectoryChooser();
+        dc.setTitle("Export study outputs to");
+        File d = dc.showDialog(window());
+        if (d == null) return;
+        try {
+            int n = exportOutputs(d.toPath());
+            status.setText("Copied " + n + " output files to " + d);
+        } catch (IOException ex) {
+            error("Could not copy the outputs to " + d, ex);
+        }
+    }
+
+    /**
+     * Copies every file the run wrote (CF netCDF, GeoTIFF, GeoJSON, GeoPackage, GPX, KML, CSV, maps, report…)
+     * into a folder, keeping their relative paths; each file is written atomically. Returns the number copied.
+     */
+    public int exportOutputs(Path folder) throws IOException {
+        int n = 0;
+        for (var e : study.outputs.entrySet()) {
+            Path src = Path.of(e.getValue());
+            Path rel = Path.of(e.getKey());
+            if (rel.isAbsolute() || rel.normalize().startsWith("..")) rel = src.getFileName();
+            Path target = folder.resolve(rel.normalize());
+            AtomicWrite.toFile(target, tmp -> java.nio.file.Files.copy(src, tmp));
+            n++;
+        }
+        return n;
     }
 
     private void showOutputs() {

@@ -48,6 +48,8 @@ class MainWindowUiTest {
     private final CountDownLatch started = new CountDownLatch(1);
     private final AtomicInteger loops = new AtomicInteger();
 
+    @org.junit.jupiter.api.io.TempDir Path tmp;
+
     @Start
     void start(Stage stage) throws Exception {
         this.stage = stage;
@@ -61,7 +63,7 @@ class MainWindowUiTest {
             }
             return SyntheticStudy.build();
         };
-        Path scen = Files.createTempDirectory("gyreplan-ui").resolve("scenario.yaml");
+        Path scen = tmp.resolve("scenario.yaml");
         Files.writeString(scen, "# test placeholder\n");
         window = new MainWindow(runner, null, scen);
         window.setDialogs(false);
@@ -101,6 +103,18 @@ class MainWindowUiTest {
         });
         var read = ImageIO.read(png.toFile());
         assertEquals((int) window.map().canvas().getWidth(), read.getWidth());
+
+        // export of the run's files: copied byte for byte under their relative paths
+        Path runDir = Files.createDirectories(tmp.resolve("run"));
+        Files.createDirectories(runDir.resolve("maps"));
+        Files.write(runDir.resolve("maps/psi.png"), new byte[] {1, 2, 3});
+        Files.writeString(runDir.resolve("index.csv"), "a,b\n1,2\n");
+        window.study().outputs.put("maps/psi.png", runDir.resolve("maps/psi.png").toString());
+        window.study().outputs.put("index.csv", runDir.resolve("index.csv").toString());
+        Path dest = tmp.resolve("export");
+        assertEquals(2, window.exportOutputs(dest));
+        assertEquals(-1, Files.mismatch(runDir.resolve("maps/psi.png"), dest.resolve("maps/psi.png")));
+        assertEquals(-1, Files.mismatch(runDir.resolve("index.csv"), dest.resolve("index.csv")));
     }
 
     @Test
