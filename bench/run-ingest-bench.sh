@@ -14,6 +14,8 @@ echo "== Java, one thread (like NumPy), -Xmx512m"
 java -Xmx512m -cp "$CP" org.gyreplan.bench.ingest.IngestBenchmark "$FILE" "$REPEATS" single 2>/dev/null
 echo "== Java, read-ahead thread, -Xmx512m"
 java -Xmx512m -cp "$CP" org.gyreplan.bench.ingest.IngestBenchmark "$FILE" "$REPEATS" readahead 2>/dev/null
+echo "== Java, benchmark-only inline formulas (same numerics, one pass), -Xmx512m"
+java -Xmx512m -cp "$CP" org.gyreplan.bench.ingest.IngestBenchmark "$FILE" "$REPEATS" inline 2>/dev/null
 echo "== NumPy $(/usr/bin/python3 -c 'import numpy, scipy; print(numpy.__version__, "/ SciPy", scipy.__version__)')"
 /usr/bin/python3 -W ignore bench/scripts/ingest_numpy.py "$FILE" "$REPEATS"
 echo "(compare the checksum lines: both implementations must agree to ~9 digits)"

@@ -273,8 +273,8 @@ def make_demo():
 
     # reference numbers (numpy, independent of Gyreplan), drag law of Large & Yeager (2004) as quoted in CHECKS.md
     # (10^3 C_D = 2.7/U + 0.142 + U/13.09, the 1/U term floored at U = 0.5 m/s)
-    # strict interior, as Gyreplan's mask (cell centres on the polygon edge are outside)
-    wet = inside(LON, LAT, DEMO_RING) & (distance_km(LON, LAT, DEMO_RING) > 1e-3)
+    # cell centres inside the polygon or on its edge, as Gyreplan's basin mask
+    wet = inside(LON, LAT, DEMO_RING) | (distance_km(LON, LAT, DEMO_RING) < 1e-3)
     speed = np.hypot(u.astype(float), v.astype(float))
     cd = (2.7 / np.maximum(speed, 0.5) + 0.142 + speed / 13.09) * 1e-3
     tx = (RHO_AIR * cd * speed * u).mean(axis=0)

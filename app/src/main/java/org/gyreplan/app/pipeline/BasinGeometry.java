@@ -99,18 +99,7 @@ record BasinGeometry(Geometry basin, List<Geometry> exclusions, List<String> nam
 
     /** A copy of the grid whose ocean cells are those whose centre lies inside the basin. */
     LonLatGrid mask(LonLatGrid g) {
-        IndexedPointInAreaLocator loc = new IndexedPointInAreaLocator(basin);
-        boolean[] ocean = g.oceanMask();
-        Coordinate c = new Coordinate();
-        for (int j = 0; j < g.ny(); j++) {
-            for (int i = 0; i < g.nx(); i++) {
-                int k = g.index(i, j);
-                c.x = g.lonDeg(i);
-                c.y = g.latDeg(j);
-                ocean[k] &= loc.locate(c) == Location.INTERIOR;
-            }
-        }
-        return g.withOcean(ocean);
+        return org.gyreplan.gisdata.mask.PolygonMask.applyBasin(g, basin);
     }
 
     /** Outer and inner rings of the basin as [lon, lat] lists (for drawing). */

@@ -20,7 +20,41 @@ public final class Inspection {
     public static String describe(Path file) throws CannotInspect {
         String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".yaml") || name.endsWith(".yml")) return scenario(file);
-        throw new CannotInspect("no reader for this kind of file in this build (known: .yaml scenario files)");
+        try {
+            if (name.endsWith(".nc") || name.endsWith(".cdf") || name.endsWith(".nc4") || name.endsWith(".netcdf")) {
+                return org.gyreplan.gisdata.cf.FileInspector.describe(file).toText();
+            }
+            if (name.endsWith(".geojson") || name.endsWith(".json") || name.endsWith(".shp") || name.endsWith(".gpkg")
+                    || name.endsWith(".wkt")) {
+                return polygons(file);
+            }
+            if (name.endsWith(".csv")) {
+                var s = org.gyreplan.gisdata.csv.StationWindCsv.read(file);
+                return "Station wind CSV " + file + "\n  " + s + "\n";
+            }
+        } catch (java.io.IOException | IllegalArgumentException e) {
+            throw new CannotInspect(e.getMessage() == null ? e.toString() : e.getMessage(), e);
+        }
+        throw new CannotInspect("unknown kind of file; known: netCDF (.nc, .cdf), polygon files (.geojson, .shp, .gpkg, .wkt),"
+                + " station wind CSV (.csv) and scenarios (.yaml)");
+    }
+
+    private static String polygons(Path file) throws java.io.IOException {
+        var all = org.gyreplan.gisdata.vector.PolygonFiles.read(file);
+        StringBuilder b = new StringBuilder("Polygon file ").append(file).append('\n');
+        b.append("  polygons: ").append(all.size()).append('\n');
+        for (var f : all) {
+            var e = f.polygon().getEnvelopeInternal();
+            int holes = 0;
+            for (int k = 0; k < f.polygon().getNumGeometries(); k++) {
+                if (f.polygon().getGeometryN(k) instanceof org.locationtech.jts.geom.Polygon p) holes += p.getNumInteriorRing();
+            }
+            b.append(String.format(Locale.ROOT, "  - %s: lon %.3f…%.3f°, lat %.3f…%.3f°, %d hole(s)%s%n",
+                    f.name() == null ? "(no name)" : f.name(), e.getMinX(), e.getMaxX(), e.getMinY(), e.getMaxY(), holes,
+                    f.repaired() ? ", repaired" : ""));
+        }
+        b.append("  use as: basin.polygon (water inside; holes are islands) or exclusionZones\n");
+        return b.toString();
     }
 
     private static String scenario(Path file) throws CannotInspect {

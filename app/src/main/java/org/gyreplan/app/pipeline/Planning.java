@@ -19,7 +19,29 @@ import org.gyreplan.solver.plan.zones.UpwellingZones;
 import org.gyreplan.solver.plan.zones.ZoneThresholds;
 import org.locationtech.jts.geom.Envelope;
 
+import org.gyreplan.app.scenario.ScenarioValidator;
+import org.gyreplan.solver.coast.CoastPoint;
+import org.gyreplan.solver.plan.mooring.DeploymentWindows;
+import org.gyreplan.solver.plan.survey.CruiseSchedule;
+import org.gyreplan.solver.plan.survey.DepthModel;
+import org.gyreplan.solver.plan.survey.Obstacles;
+import org.gyreplan.solver.plan.survey.Route;
+import org.gyreplan.solver.plan.survey.ScheduleParameters;
+import org.gyreplan.solver.plan.survey.ShorePoint;
+import org.gyreplan.solver.plan.survey.Stop;
+import org.gyreplan.solver.plan.survey.StopKind;
+import org.gyreplan.solver.plan.survey.SurveyRoute;
+import org.gyreplan.solver.plan.survey.SurveyStops;
+import org.gyreplan.solver.plan.survey.Transect;
+import org.gyreplan.solver.plan.survey.TransectDesign;
+import org.gyreplan.solver.plan.survey.Transects;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+
 import java.io.IOException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -31,13 +53,18 @@ final class Planning {
     static final double ZONE_MIN_PERSISTENCE = 0.5;
 
     /** Product keys in {@link StudyResult#products()}. */
-    static final String ZONES = "zones", SITING = "moorings", DEPTH = "depth", EXCLUSIONS = "exclusions";
+    static final String ZONES = "zones", SITING = "moorings", DEPTH = "depth", EXCLUSIONS = "exclusions",
+            ROUTE = "route", SCHEDULE = "schedule", TRANSECTS = "transects";
+    /** Deck-work wind limit for the weather model: 25 kn (common practice, CHECKS.md PL-05). */
+    static final double DECK_LIMIT_MPS = 25 * 1852.0 / 3600.0;
 
+    private static final GeometryFactory GF = new GeometryFactory();
     private final StudyPipeline.RunState st;
 
     Planning(StudyPipeline.RunState st) { this.st = st; }
 
     void run() throws StudyException {
+        if (st.stats == null) return;
         st.cancel.check();
         Scenario s = st.scenario;
         st.progress.progress("planning", 0.0, "upwelling zones");
@@ -61,7 +88,77 @@ final class Planning {
                 siting(s, zones, depth);
             }
         }
+        if (s.survey != null) survey(s, zones, depth);
         st.progress.progress("planning", 1.0, zones.size() + " zones");
+    }
+
+    private void survey(Scenario s, List<UpwellingZone> zones, ScalarField depth) throws StudyException {
+        st.cancel.check();
+        Scenario.Survey v = s.survey;
+        if (st.coastPoints.size() < 2) {
+            st.warn(RunWarning.Kind.PRODUCT, "survey not planned: it needs at least two coast index points to lay transects");
+            return;
+        }
+        st.progress.progress("planning", 0.8, "survey transects");
+        List<CoastPoint> ordered = new ArrayList<>(st.coastPoints);
+        ordered.sort(Comparator.comparingDouble(CoastPoint::alongCoastKm));
+        double span = ordered.get(ordered.size() - 1).alongCoastKm() - ordered.get(0).alongCoastKm();
+        int count = v.transectCount == null ? 4 : v.transectCount;
+        double spacing = Math.max(10.0, span / Math.max(1, count - 1));
+        TransectDesign design = TransectDesign.simple(spacing, count, v.transectLengthKm, v.stationSpacingKm);
+        Geometry zoneUnion = null;
+        if (!zones.isEmpty()) {
+            List<Geometry> polys = new ArrayList<>();
+            for (UpwellingZone z : zones) polys.add(z.polygon());
+            zoneUnion = GF.buildGeometry(polys).union();
+        }
+        Envelope e = new Envelope(st.basin.envelope());
+        e.expandBy(5);
+        Geometry land = GF.toGeometry(e).difference(st.basin.basin());
+        DepthModel dm = depth == null ? DepthModel.UNKNOWN : DepthModel.of(depth);
+        List<Transect> transects;
+        try {
+            transects = Transects.design(ShorePoint.allOf(ordered), design, null, land, dm);
+        } catch (IllegalArgumentException ex) {
+            st.warn(RunWarning.Kind.PRODUCT, "survey not planned: " + ex.getMessage());
+            return;
+        }
+        List<Stop> stops = new ArrayList<>(SurveyStops.ofTransects(transects));
+        SitingResult sr = (SitingResult) st.products.get(SITING);
+        if (sr != null) stops.addAll(SurveyStops.ofSites(sr.sites(), StopKind.MOORING_DEPLOYMENT));
+        if (stops.isEmpty()) {
+            st.warn(RunWarning.Kind.PRODUCT, "survey not planned: no station fits inside the basin");
+            return;
+        }
+        List<Geometry> obstacles = new ArrayList<>(st.basin.exclusions());
+        obstacles.add(land);
+        Stop port = Stop.port(v.port.name, v.port.lonDeg, v.port.latDeg);
+        st.progress.progress("planning", 0.85, "route through " + stops.size() + " stops");
+        Route route;
+        try {
+            route = SurveyRoute.plan(port, stops, Obstacles.of(obstacles, 2.0, 5.0),
+                    (stage, f, m) -> st.progress.progress("planning", 0.85 + 0.1 * Math.max(0, f), m), st.cancel);
+        } catch (IllegalArgumentException ex) {
+            st.warn(RunWarning.Kind.PRODUCT, "survey route not planned: " + ex.getMessage());
+            return;
+        }
+        DeploymentWindows windows = st.portWind == null ? null
+                : DeploymentWindows.of(java.util.Arrays.asList(st.times), st.portWind, DECK_LIMIT_MPS);
+        ScheduleParameters base = ScheduleParameters.commonPractice();
+        ScheduleParameters params = new ScheduleParameters(v.shipSpeedKnots, base.ctdDescentMpm(), base.ctdAscentMpm(),
+                v.stationTimeHours * 60.0, base.bottomClearanceM(), base.maxCastDepthM(), base.mooringDeploymentHours(),
+                base.mooringServiceHours(), base.daylightForMooring(), windows, windows, base.maxDowntimeFraction());
+        Instant departure = ScenarioValidator.parseInstant(v.start).orElse(st.times.length > 0 ? st.times[st.times.length - 1] : Instant.EPOCH);
+        CruiseSchedule schedule = CruiseSchedule.of(route, params, departure);
+        st.products.put(TRANSECTS, transects);
+        st.products.put(ROUTE, route);
+        st.products.put(SCHEDULE, schedule);
+        double contingency = v.weatherDowntimePercent == null ? 0 : v.weatherDowntimePercent;
+        st.headlines.put(Headline.SURVEY_DURATION, schedule.totalDays() * 24.0 * (1 + contingency / 100.0));
+        st.provenanceExtra.put("survey", String.format(java.util.Locale.ROOT,
+                "%d transects of %.0f km, stations every %.0f km, ship %.1f kn, %.1f h overhead per station;"
+                        + " weather from the wind record near the port (deck limit 25 kn); contingency %.0f %%",
+                transects.size(), v.transectLengthKm, v.stationSpacingKm, v.shipSpeedKnots, v.stationTimeHours, contingency));
     }
 
     private void siting(Scenario s, List<UpwellingZone> zones, ScalarField depth) {

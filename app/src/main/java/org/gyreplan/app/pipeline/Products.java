@@ -6,7 +6,9 @@ import org.gyreplan.app.render.Contours;
 import org.gyreplan.app.render.MapRenderer;
 import org.gyreplan.app.report.ReportWriter;
 import org.gyreplan.app.scenario.Scenario;
+import org.gyreplan.gisdata.cf.CfNetcdfWriter;
 import org.gyreplan.gisdata.csv.CsvTable;
+import org.gyreplan.gisdata.raster.GeoTiffWriter;
 import org.gyreplan.gisdata.vector.Feature;
 import org.gyreplan.gisdata.vector.FeatureLayer;
 import org.gyreplan.gisdata.vector.GeoJsonFiles;
@@ -20,6 +22,11 @@ import org.gyreplan.solver.grid.VectorField;
 import org.gyreplan.solver.gyre.BoundaryCurrentDiagnostics;
 import org.gyreplan.solver.plan.mooring.ChosenSite;
 import org.gyreplan.solver.plan.mooring.SitingResult;
+import org.gyreplan.solver.plan.survey.CruiseSchedule;
+import org.gyreplan.solver.plan.survey.Leg;
+import org.gyreplan.solver.plan.survey.LegRow;
+import org.gyreplan.solver.plan.survey.Route;
+import org.gyreplan.solver.plan.survey.Stop;
 import org.gyreplan.solver.plan.zones.UpwellingZone;
 import org.gyreplan.solver.series.MonthlyClimatology;
 import org.gyreplan.solver.series.TimeSeries;
@@ -68,6 +75,8 @@ final class Products {
         if (s.wants(Scenario.Output.MAPS)) maps();
         if (s.wants(Scenario.Output.MAPS)) charts();
         if (s.wants(Scenario.Output.CSV)) csv();
+        if (s.wants(Scenario.Output.NETCDF)) netcdf();
+        if (s.wants(Scenario.Output.GEOTIFF)) geotiff();
         vectors();
         sections();
         if (s.wants(Scenario.Output.REPORT)) {
@@ -105,7 +114,23 @@ final class Products {
         return new ScalarField(depth.grid(), v, "elevation", "m", "elevation");
     }
 
+    private List<double[]> trackPoints() {
+        Route route = (Route) st.products.get(Planning.ROUTE);
+        List<double[]> pts = new ArrayList<>();
+        if (route == null) return pts;
+        for (Leg l : route.legs()) {
+            for (double[] w : l.waypoints()) {
+                if (pts.isEmpty() || pts.get(pts.size() - 1)[0] != w[0] || pts.get(pts.size() - 1)[1] != w[1]) pts.add(w);
+            }
+        }
+        return pts;
+    }
+
     private void addPlanOverlays(MapRenderer.MapSpec m) {
+        List<double[]> track = trackPoints();
+        if (!track.isEmpty()) {
+            m.overlay(new MapRenderer.Overlay(MapRenderer.Overlay.Kind.TRACK, "survey track and stations", new Color(0x1B, 0x26, 0x4F), track, null));
+        }
         if (!st.coastPoints.isEmpty()) {
             List<double[]> pts = new ArrayList<>();
             List<String> labels = new ArrayList<>();
@@ -322,6 +347,17 @@ final class Products {
             }
             st.out.writeString("plan/moorings.csv", m.toText());
         }
+        CruiseSchedule sc = (CruiseSchedule) st.products.get(Planning.SCHEDULE);
+        if (sc != null) {
+            CsvTable t = new CsvTable(List.of("leg", "from", "to", CsvTable.column("distance", "nmi"), CsvTable.column("transit", "h"),
+                    "arrival_utc", CsvTable.column("daylight_wait", "h"), CsvTable.column("work", "h"), CsvTable.column("weather", "h"),
+                    "departure_utc", CsvTable.column("elapsed", "h")));
+            for (LegRow r : sc.rows()) {
+                t.add(r.index(), r.fromId(), r.toId(), round(r.distanceNmi()), round(r.transitHours()), String.valueOf(r.arrival()),
+                        round(r.daylightWaitHours()), round(r.workHours()), round(r.weatherHours()), String.valueOf(r.departure()), round(r.cumulativeHours()));
+            }
+            st.out.writeString("plan/cruise_schedule.csv", t.toText());
+        }
     }
 
     private static Double round(double v) {
@@ -333,6 +369,101 @@ final class Products {
         double s = 0; int n = 0;
         for (double x : v) if (Double.isFinite(x)) { s += x; n++; }
         return n > 0 ? s / n : Double.NaN;
+    }
+
+    // ------------------------------------------------------------------------------------------- gridded files
+
+    private CfNetcdfWriter.GlobalInfo info(String what) {
+        java.util.Map<String, String> extra = new java.util.LinkedHashMap<>();
+        extra.put("comment", ReportWriter.CAUTION);
+        extra.put("gyreplan_sign_conventions", "stress and transports toward (eastward, northward); Ekman pumping positive upward;"
+                + " streamfunction in Sv with northward transport = d(psi)/dx; coastal index positive offshore");
+        extra.put("gyreplan_drag_law", st.dragLaw == null ? "" : st.dragLaw.name());
+        extra.put("gyreplan_rho0", Double.toString(st.constants.rho0()));
+        extra.put("gyreplan_rho_air", Double.toString(st.constants.rhoAir()));
+        extra.put("gyreplan_equatorial_cutoff_deg", Double.toString(st.cutoff.latitudeDeg()));
+        return new CfNetcdfWriter.GlobalInfo(title() + ": " + what, "Gyreplan " + Version.current(),
+                "computed by Gyreplan from " + s.winds.file + " (" + period() + ")", extra);
+    }
+
+    private static CfNetcdfWriter.FieldSpec spec(ScalarField f, String standardName) {
+        return new CfNetcdfWriter.FieldSpec(f.name(), f.units(), standardName, f.longName());
+    }
+
+    private void netcdf() throws IOException {
+        tick("netCDF fields");
+        List<CfNetcdfWriter.FieldSpec> specs = new ArrayList<>();
+        List<double[]> values = new ArrayList<>();
+        VectorField tau = st.vectors.get("stress");
+        if (tau != null) {
+            specs.add(spec(tau.eastward(), "surface_downward_eastward_stress"));
+            values.add(tau.eastward().values());
+            specs.add(spec(tau.northward(), "surface_downward_northward_stress"));
+            values.add(tau.northward().values());
+        }
+        VectorField ek = st.vectors.get("ekman_transport");
+        if (ek != null) {
+            specs.add(spec(ek.eastward(), null));
+            values.add(ek.eastward().values());
+            specs.add(spec(ek.northward(), null));
+            values.add(ek.northward().values());
+        }
+        for (String k : List.of("stress_curl", "ekman_pumping", "upwelling_persistence", "wind_speed")) {
+            ScalarField f = st.fields.get(k);
+            if (f == null) continue;
+            specs.add(spec(f, k.equals("wind_speed") ? "wind_speed" : null));
+            values.add(f.values());
+        }
+        ScalarField depth = (ScalarField) st.products.get(Planning.DEPTH);
+        if (depth != null) {
+            specs.add(spec(depth, "sea_floor_depth_below_sea_surface"));
+            values.add(depth.values());
+        }
+        if (!specs.isEmpty()) {
+            st.out.writeFile("fields/surface_means.nc", tmp -> CfNetcdfWriter.writeGridded(tmp, st.windGrid, List.of(), specs,
+                    info("time-mean wind stress, Ekman transport and pumping, upwelling persistence"), k -> values,
+                    org.gyreplan.solver.progress.ProgressListener.NONE, st.cancel));
+        }
+        ScalarField psi = st.fields.get("streamfunction");
+        if (psi != null && st.gyre != null) {
+            List<CfNetcdfWriter.FieldSpec> gs = new ArrayList<>(List.of(spec(psi, "ocean_barotropic_streamfunction")));
+            List<double[]> gv = new ArrayList<>(List.of(psi.values()));
+            if (st.gyre.sverdrup() != null && st.gyre.sverdrup() != psi) {
+                ScalarField sv = st.gyre.sverdrup();
+                gs.add(new CfNetcdfWriter.FieldSpec("sverdrup_streamfunction", sv.units(), null,
+                        "Sverdrup streamfunction of the interior balance, zero on the eastern coast; northward transport = d(psi)/dx"));
+                gv.add(sv.values());
+            }
+            st.out.writeFile("fields/streamfunction.nc", tmp -> CfNetcdfWriter.writeGridded(tmp, psi.grid(), List.of(), gs,
+                    info("depth-integrated streamfunction (" + s.gyre.model.name().toLowerCase(Locale.ROOT) + ")"), k -> gv,
+                    org.gyreplan.solver.progress.ProgressListener.NONE, st.cancel));
+        }
+        if (!st.coastSeries.isEmpty()) {
+            List<CfNetcdfWriter.Station> stations = new ArrayList<>();
+            TimeSeries first = st.coastSeries.get(0).daily();
+            List<Instant> times = new ArrayList<>();
+            for (int k = 0; k < first.size(); k++) times.add(first.time(k));
+            double[][] v = new double[st.coastSeries.size()][];
+            for (int p = 0; p < v.length; p++) {
+                StudyPipeline.CoastSeries c = st.coastSeries.get(p);
+                stations.add(new CfNetcdfWriter.Station(c.point().name(), c.point().lonDeg(), c.point().latDeg()));
+                double[] d = c.daily().values();
+                v[p] = d.length == times.size() ? d : java.util.Arrays.copyOf(d, times.size());
+            }
+            CfNetcdfWriter.FieldSpec f = new CfNetcdfWriter.FieldSpec("coastal_upwelling_index", "m3 s-1 (100 m)-1", null,
+                    "coastal upwelling index: cross-shore Ekman transport per 100 m of coastline, positive offshore (upwelling)");
+            st.out.writeFile("series/coastal_index.nc", tmp -> CfNetcdfWriter.writeStations(tmp, stations, times, List.of(f),
+                    List.<double[][]>of(v), info("daily coastal upwelling index at the index points")));
+        }
+    }
+
+    private void geotiff() throws IOException {
+        tick("GeoTIFF");
+        for (String k : List.of("ekman_pumping", "upwelling_persistence", "streamfunction")) {
+            ScalarField f = st.fields.get(k);
+            if (f == null) continue;
+            st.out.writeFile("fields/" + k + ".tif", tmp -> GeoTiffWriter.write(tmp, f));
+        }
     }
 
     // ------------------------------------------------------------------------------------------- vectors
@@ -368,6 +499,31 @@ final class Products {
             }
             layers.add(new FeatureLayer("mooring_sites", mf));
         }
+        Route route = (Route) st.products.get(Planning.ROUTE);
+        List<GpxFiles.Route> gpxRoutes = new ArrayList<>();
+        if (route != null) {
+            List<double[]> track = trackPoints();
+            Coordinate[] cs = new Coordinate[track.size()];
+            for (int k = 0; k < cs.length; k++) cs[k] = new Coordinate(track.get(k)[0], track.get(k)[1]);
+            CruiseSchedule sc = (CruiseSchedule) st.products.get(Planning.SCHEDULE);
+            if (cs.length >= 2) {
+                layers.add(new FeatureLayer("survey_track", List.of(Feature.of(GF.createLineString(cs), "name", "survey track",
+                        "distance_nmi", round(route.totalDistanceNmi()), "days", sc == null ? null : round(sc.totalDays()),
+                        "caution", org.gyreplan.gisdata.vector.SeaCaution.TEXT))));
+            }
+            List<Feature> sf = new ArrayList<>();
+            List<GpxFiles.Waypoint> rp = new ArrayList<>();
+            rp.add(new GpxFiles.Waypoint(route.port().id(), route.port().lonDeg(), route.port().latDeg(), "departure"));
+            int n = 1;
+            for (Stop stop : route.order()) {
+                sf.add(Feature.of(GF.createPoint(new Coordinate(stop.lonDeg(), stop.latDeg())), "name", stop.id(), "order", n++,
+                        "kind", stop.kind().name().toLowerCase(Locale.ROOT), "depth_m", round(stop.depthM())));
+                rp.add(new GpxFiles.Waypoint(stop.id(), stop.lonDeg(), stop.latDeg(), stop.kind().name().toLowerCase(Locale.ROOT)));
+            }
+            rp.add(new GpxFiles.Waypoint(route.port().id(), route.port().lonDeg(), route.port().latDeg(), "return"));
+            layers.add(new FeatureLayer("survey_stations", sf));
+            gpxRoutes.add(new GpxFiles.Route("survey", "planned survey route. " + org.gyreplan.gisdata.vector.SeaCaution.TEXT, rp));
+        }
         if (layers.isEmpty()) return;
         if (s.wants(Scenario.Output.GEOJSON)) {
             for (FeatureLayer l : layers) {
@@ -378,8 +534,8 @@ final class Products {
         if (s.wants(Scenario.Output.KML)) {
             st.out.writeString("plan/plan.kml", KmlFiles.toXml(title(), layers));
         }
-        if (s.wants(Scenario.Output.GPX) && !wpts.isEmpty()) {
-            st.out.writeString("plan/plan.gpx", GpxFiles.toXml(title(), st.times.length > 0 ? st.times[st.times.length - 1] : Instant.EPOCH, wpts, List.of()));
+        if (s.wants(Scenario.Output.GPX) && (!wpts.isEmpty() || !gpxRoutes.isEmpty())) {
+            st.out.writeString("plan/plan.gpx", GpxFiles.toXml(title(), st.times.length > 0 ? st.times[st.times.length - 1] : Instant.EPOCH, wpts, gpxRoutes));
         }
         if (s.wants(Scenario.Output.GEOPACKAGE)) {
             st.out.writeFile("plan/plan.gpkg", tmp -> GeoPackageFiles.write(tmp, layers, Instant.EPOCH));
@@ -488,7 +644,27 @@ final class Products {
                 for (String c : sr.cautions()) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
                 h.append("</ul>");
             }
-            report.section(new ReportWriter.Section("plan", "Zones and mooring plan", h.toString()));
+            CruiseSchedule sc = (CruiseSchedule) st.products.get(Planning.SCHEDULE);
+            Route route = (Route) st.products.get(Planning.ROUTE);
+            if (sc != null && route != null) {
+                double cont = s.survey.weatherDowntimePercent == null ? 0 : s.survey.weatherDowntimePercent;
+                h.append("<h3>Survey cruise</h3><table><tbody>")
+                        .append("<tr><th>Port</th><td>").append(ReportWriter.esc(s.survey.port.name)).append("</td></tr>")
+                        .append("<tr><th>Departure</th><td>").append(sc.departure()).append("</td></tr>")
+                        .append("<tr><th>Stops</th><td>").append(route.order().size()).append(" (route: ").append(ReportWriter.esc(route.method())).append(")</td></tr>")
+                        .append("<tr><th>Distance</th><td>").append(ReportWriter.number(sc.totalDistanceNmi())).append(" nmi</td></tr>")
+                        .append("<tr><th>Transit</th><td>").append(ReportWriter.number(sc.totalTransitHours())).append(" h</td></tr>")
+                        .append("<tr><th>Station work incl. weather</th><td>").append(ReportWriter.number(sc.totalStationHours()))
+                        .append(" h (of which weather ").append(ReportWriter.number(sc.totalWeatherHours())).append(" h)</td></tr>")
+                        .append("<tr><th>Daylight waits</th><td>").append(ReportWriter.number(sc.totalWaitHours())).append(" h</td></tr>")
+                        .append("<tr><th>Total</th><td>").append(ReportWriter.number(sc.totalDays())).append(" days; with ")
+                        .append(ReportWriter.number(cont)).append(" % contingency ").append(ReportWriter.number(sc.totalDays() * (1 + cont / 100)))
+                        .append(" days</td></tr><tr><th>Return</th><td>").append(sc.returnTime()).append("</td></tr></tbody></table><ul>");
+                for (String c : sc.cautions()) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
+                for (String c : route.cautions()) h.append("<li>").append(ReportWriter.esc(c)).append("</li>");
+                h.append("</ul><p>Full leg table: <code>plan/cruise_schedule.csv</code>; track: <code>plan/plan.gpx</code>, <code>plan/plan.kml</code>.</p>");
+            }
+            report.section(new ReportWriter.Section("plan", "Zones, moorings and survey plan", h.toString()));
         }
     }
 

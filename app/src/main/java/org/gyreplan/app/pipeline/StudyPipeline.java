@@ -227,6 +227,8 @@ public final class StudyPipeline {
             int np = st.coastPoints.size();
             double[][] ui = new double[np][nt];
             Instant[] times = new Instant[nt];
+            int portCell = s.survey != null && s.survey.port != null ? nearestOcean(g, s.survey.port.lonDeg, s.survey.port.latDeg) : -1;
+            double[] portWind = portCell >= 0 ? new double[nt] : null;
             for (int k = 0; k < nt; k++) {
                 st.cancel.check();
                 GriddedSeries.Step step = series.read(k);
@@ -239,6 +241,7 @@ public final class StudyPipeline {
                 } else {
                     wind = new VectorField(on(g, step.fields().get(0)), on(g, step.fields().get(1)));
                 }
+                if (portWind != null) portWind[k] = wind.magnitude(portCell);
                 SurfaceResponse.Step r = response.fromWind(wind);
                 acc.add(wind, r);
                 stats.add(times[k], r.ekmanPumping());
@@ -250,6 +253,7 @@ public final class StudyPipeline {
                 }
             }
             st.times = times;
+            st.portWind = portWind;
             st.indexRaw = ui;
             st.stats = stats;
             st.fields.put("wind_speed", acc.meanSpeed());
@@ -302,6 +306,23 @@ public final class StudyPipeline {
             if (ex instanceof java.nio.file.NoSuchFileException) throw ex;
             throw new StudyException(file, "winds", GyreplanText.oneLine(ex), ex);
         }
+    }
+
+    /** Flat index of the ocean cell nearest to a position (by grid distance), or −1 if the grid has none. */
+    static int nearestOcean(LonLatGrid g, double lonDeg, double latDeg) {
+        double x = g.columnOf(lonDeg), y = g.rowOf(latDeg);
+        int best = -1;
+        double bd = Double.POSITIVE_INFINITY;
+        double c = Math.cos(Math.toRadians(latDeg)) * g.dLonDeg() / g.dLatDeg();
+        for (int j = 0; j < g.ny(); j++) {
+            for (int i = 0; i < g.nx(); i++) {
+                int k = g.index(i, j);
+                if (!g.isOcean(k)) continue;
+                double d = Math.hypot((i - x) * c, j - y);
+                if (d < bd) { bd = d; best = k; }
+            }
+        }
+        return best;
     }
 
     private static ScalarField on(LonLatGrid masked, ScalarField f) {
@@ -546,6 +567,7 @@ public final class StudyPipeline {
         LonLatGrid grid;
         Instant[] times = new Instant[0];
         double[][] indexRaw = new double[0][];
+        double[] portWind;
         UpwellingStatistics stats;
         GyreSolution gyre;
         List<CoastSeries> coastSeries = List.of();

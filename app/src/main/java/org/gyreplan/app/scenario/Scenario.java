@@ -227,7 +227,7 @@ public final class Scenario {
         public Map<String, Double> weights;
     }
 
-    /** Survey cruise: port, ship and station pattern. */
+    /** Survey cruise: port (its position is the harbour entrance, on water), ship and station pattern. */
     @JsonInclude(JsonInclude.Include.NON_NULL)
     @JsonPropertyOrder({"port", "shipSpeedKnots", "stationSpacingKm", "transectLengthKm", "transectCount",
             "stationTimeHours", "weatherDowntimePercent", "start"})

@@ -47,6 +47,21 @@ class CliGoldenTest {
     }
 
     @Test
+    void verifyAllCasesPass() throws IOException {
+        Run r = exec("verify");
+        assertEquals(0, r.code(), r.out() + r.err());
+        Golden.check("verify-all", r.out());
+    }
+
+    @Test
+    void inspectNetcdfFile() throws IOException {
+        Run r = exec("inspect", org.gyreplan.app.pipeline.TestScenarios.demoWinds().toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("u10") && r.out().contains("v10"), r.out());
+        Golden.check("inspect-netcdf", r.out().replace(org.gyreplan.app.pipeline.TestScenarios.demoWinds().toString(), "<winds>"));
+    }
+
+    @Test
     void inspectScenario() throws IOException {
         Path s = scenario();
         Run r = exec("inspect", s.toString());

@@ -83,6 +83,11 @@ public final class LandPolygons {
         return loaded(r).polygons().size();
     }
 
+    /** {@link #clip(Resolution, double, double, double, double)} with the box as an envelope (x = lon, y = lat). */
+    public static Geometry clip(Resolution r, Envelope box) {
+        return clip(r, box.getMinX(), box.getMinY(), box.getMaxX(), box.getMaxY());
+    }
+
     /**
      * The land inside a box, clipped to it. The box's longitudes are continuous: {@code westDeg} may be below −180°
      * or {@code eastDeg} above 180° (a box across the antimeridian, e.g. 160…200), and the land is returned in

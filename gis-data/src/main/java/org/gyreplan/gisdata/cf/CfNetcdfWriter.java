@@ -11,7 +11,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.Instant;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -221,9 +220,8 @@ public final class CfNetcdfWriter {
 
     private static double[] seconds(List<Instant> times) {
         double[] t = new double[times.size()];
-        List<Instant> seen = new ArrayList<>(times);
         for (int k = 0; k < t.length; k++) {
-            Instant i = seen.get(k);
+            Instant i = times.get(k);
             t[k] = i.getEpochSecond() + i.getNano() * 1e-9;
         }
         return t;

@@ -91,8 +91,9 @@ public final class FileInspector {
         }
     }
 
-    /** Describes a netCDF file (classic, 64-bit offset or netCDF-4). */
+    /** Describes a netCDF file (classic, 64-bit offset or netCDF-4) or a single-band GeoTIFF. */
     public static FileSummary describe(Path file) throws IOException {
+        if (isTiff(file)) return describeTiff(file);
         try (NetcdfDataset nc = NetcdfDataset.open(file)) {
             List<String> notes = new ArrayList<>();
             Map<String, String> roleOf = new LinkedHashMap<>();
@@ -166,5 +167,27 @@ public final class FileInspector {
             if (grid != null && grid.latitudeDescending()) notes.add("latitude is stored north to south; Gyreplan flips it to ascending");
             return new FileSummary(file, nc.format().label(), nc.dimensions(), vars, nc.globalAttributes(), grid, time, notes);
         }
+    }
+
+    private static boolean isTiff(Path f) throws IOException {
+        try (java.io.InputStream in = java.nio.file.Files.newInputStream(f)) {
+            byte[] m = in.readNBytes(4);
+            return m.length == 4 && ((m[0] == 'I' && m[1] == 'I' && m[2] == 42 && m[3] == 0)
+                    || (m[0] == 'M' && m[1] == 'M' && m[2] == 0 && m[3] == 42));
+        }
+    }
+
+    private static FileSummary describeTiff(Path file) throws IOException {
+        org.gyreplan.gisdata.raster.GeoTiffReader.Raster r = org.gyreplan.gisdata.raster.GeoTiffReader.read(file);
+        GridInfo g = new GridInfo("(GeoTIFF columns)", "(GeoTIFF rows)", r.width(), r.height(), r.westDeg(),
+                r.westDeg() + r.width() * r.dLonDeg(), r.northDeg() - r.height() * r.dLatDeg(), r.northDeg(),
+                r.dLonDeg(), r.dLatDeg(), true, Math.abs(r.width() * r.dLonDeg() - 360) < 1e-6);
+        List<Dimension> dims = List.of(new Dimension("rows", r.height(), false), new Dimension("columns", r.width(), false));
+        VariableInfo band = new VariableInfo("band 1", "raster", List.of("rows", "columns"), null, null, null,
+                "bathymetry/topography when used as such (sign stated by the user; elevation rasters are positive up)");
+        List<String> notes = new ArrayList<>();
+        notes.add(r.epsg() == 4326 ? "CRS EPSG:4326 (WGS 84)" : r.epsg() == 0 ? "no GeographicTypeGeoKey: assumed WGS 84 longitude/latitude"
+                : "geographic CRS EPSG:" + r.epsg() + " (read as longitude/latitude)");
+        return new FileSummary(file, "GeoTIFF", dims, List.of(band), List.of(), g, null, notes);
     }
 }

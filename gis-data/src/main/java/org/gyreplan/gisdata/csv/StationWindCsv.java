@@ -159,10 +159,13 @@ public final class StationWindCsv {
             throw new CsvFormatException(Problem.MISSING_COLUMN, file, headerLineNo, null, "no time column; expected one of "
                     + TIME + " (ISO 8601) or a \"date\" column with a \"time\" column; header is " + raw(titles));
         }
-        int cSpeed = find(file, titles, options.speedColumn(), SPEED, "speed", headerLineNo, false);
-        int cDir = find(file, titles, options.directionColumn(), DIR, "direction", headerLineNo, false);
-        int cU = find(file, titles, options.uColumn(), U, "eastward (u)", headerLineNo, false);
-        int cV = find(file, titles, options.vColumn(), V, "northward (v)", headerLineNo, false);
+        // columns named in the options choose the pair; the other pair is then not looked for
+        boolean namedPolar = options.speedColumn() != null || options.directionColumn() != null;
+        boolean namedCart = options.uColumn() != null || options.vColumn() != null;
+        int cSpeed = namedCart && !namedPolar ? -1 : find(file, titles, options.speedColumn(), SPEED, "speed", headerLineNo, false);
+        int cDir = namedCart && !namedPolar ? -1 : find(file, titles, options.directionColumn(), DIR, "direction", headerLineNo, false);
+        int cU = namedPolar && !namedCart ? -1 : find(file, titles, options.uColumn(), U, "eastward (u)", headerLineNo, false);
+        int cV = namedPolar && !namedCart ? -1 : find(file, titles, options.vColumn(), V, "northward (v)", headerLineNo, false);
         boolean polar = cSpeed >= 0 && cDir >= 0, cart = cU >= 0 && cV >= 0;
         if (polar && cart) {
             throw new CsvFormatException(Problem.AMBIGUOUS_COLUMNS, file, headerLineNo, null, "has both speed/direction ("

@@ -1,5 +1,7 @@
 package org.gyreplan.gisdata.csv;
 
+import org.gyreplan.solver.series.TimeSeries;
+
 import java.time.Instant;
 import java.util.Objects;
 
@@ -49,6 +51,12 @@ public final class StationWindSeries {
     public double[] eastwardMs() { return eastwardMs.clone(); }
     /** Copy of the northward components, m s⁻¹. */
     public double[] northwardMs() { return northwardMs.clone(); }
+    /** The eastward component as a solver series named "eastward_wind" in "m s-1" (times to whole seconds). */
+    public TimeSeries eastwardSeries() { return TimeSeries.of("eastward_wind", "m s-1", times, eastwardMs); }
+
+    /** The northward component as a solver series named "northward_wind" in "m s-1" (times to whole seconds). */
+    public TimeSeries northwardSeries() { return TimeSeries.of("northward_wind", "m s-1", times, northwardMs); }
+
     /** Number of samples that are not gaps. */
     public int validCount() {
         int n = 0;

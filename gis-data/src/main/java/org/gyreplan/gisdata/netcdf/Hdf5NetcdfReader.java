@@ -268,7 +268,22 @@ public final class Hdf5NetcdfReader implements NetcdfDataset {
             synchronized (ds.getHdfFile()) {
                 data = ds.getDataFlat();
             }
-            if (data instanceof String[] s) return s.clone();
+            if (data instanceof String[] s) {
+                int[] shape = shape();
+                // netCDF-4 stores a CHAR array as one-character strings: join them along the last dimension
+                boolean chars = shape.length >= 2 && s.length > 0 && java.util.Arrays.stream(s).allMatch(x -> x.length() <= 1);
+                if (!chars) return s.clone();
+                int len = shape[shape.length - 1];
+                String[] out = new String[s.length / len];
+                for (int i = 0; i < out.length; i++) {
+                    StringBuilder b = new StringBuilder();
+                    for (int c = 0; c < len; c++) b.append(s[i * len + c]);
+                    int end = b.length();
+                    while (end > 0 && (b.charAt(end - 1) == 0 || b.charAt(end - 1) == ' ')) end--;
+                    out[i] = b.substring(0, end);
+                }
+                return out;
+            }
             throw new IOException(path + ": variable '" + name() + "' is of type " + type + ", not text");
         }
 

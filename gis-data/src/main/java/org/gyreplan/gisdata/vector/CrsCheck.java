@@ -31,14 +31,23 @@ public final class CrsCheck {
         }
         boolean geographic = u.startsWith("GEOGCS") || u.startsWith("GEOGCRS") || u.startsWith("GEODCRS")
                 || u.startsWith("GEOGRAPHICCRS");
-        String compact = u.replace(" ", "").replace("_", "");
-        boolean wgs84 = compact.contains("WGS1984") || compact.contains("WGS84") || compact.contains("\"EPSG\",\"4326\"")
-                || compact.contains("\"EPSG\",4326");
+        // the datum (or datum ensemble) name must be WGS 84; TOWGS84[...] shift parameters of another datum do not count
+        String datum = nameAfter(u, "DATUM[");
+        if (datum == null) datum = nameAfter(u, "ENSEMBLE[");
+        String d = datum == null ? "" : datum.replace(" ", "").replace("_", "");
+        boolean wgs84 = d.contains("WGS1984") || d.contains("WGS84") || d.contains("WORLDGEODETICSYSTEM1984");
         boolean degrees = !u.contains("UNIT[\"GRAD") && !u.contains("UNIT[\"RADIAN");
         if (!geographic || !wgs84 || !degrees) {
             throw new GeometryFileException(Problem.UNSUPPORTED_CRS, file, -1, null, null, "the coordinate reference ("
                     + name + ") is not geographic WGS 84 longitude/latitude in degrees; reproject to EPSG:4326 first");
         }
+    }
+
+    private static String nameAfter(String u, String keyword) {
+        int k = u.indexOf(keyword);
+        if (k < 0) return null;
+        int a = u.indexOf('"', k), b = a < 0 ? -1 : u.indexOf('"', a + 1);
+        return a >= 0 && b > a ? u.substring(a + 1, b) : null;
     }
 
     private static String firstQuoted(String t) {

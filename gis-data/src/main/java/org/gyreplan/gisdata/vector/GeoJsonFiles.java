@@ -135,6 +135,9 @@ public final class GeoJsonFiles {
                 features.add(f);
                 break;
             }
+            case "Topology":
+                throw new GeometryFileException(Problem.UNSUPPORTED_FORMAT, file, -1, null, null, "is TopoJSON, not GeoJSON;"
+                        + " convert it first, e.g. ogr2ogr -f GeoJSON out.geojson " + file.getFileName());
             default:
                 throw new GeometryFileException(Problem.UNREADABLE, file, -1, null, null, "unknown GeoJSON type \"" + type
                         + "\"; expected FeatureCollection, Feature or a geometry");

@@ -52,6 +52,30 @@ public final class GpxFiles {
     }
 
     /**
+     * Waypoints from the Point features of a layer: the name is the "name" property (else the layer name and the
+     * index), the description the "description" or "desc" property.
+     *
+     * @throws IllegalArgumentException if a feature is not a Point
+     */
+    public static List<Waypoint> waypoints(FeatureLayer layer) {
+        java.util.ArrayList<Waypoint> out = new java.util.ArrayList<>();
+        int k = 0;
+        for (Feature f : layer.features()) {
+            if (!(f.geometry() instanceof org.locationtech.jts.geom.Point)) {
+                throw new IllegalArgumentException("layer " + layer.name() + ", feature " + k + ": GPX waypoints need points, got "
+                        + f.geometry().getGeometryType());
+            }
+            Object name = f.get("name");
+            Object desc = f.get("description") != null ? f.get("description") : f.get("desc");
+            var c = f.geometry().getCoordinate();
+            out.add(new Waypoint(name == null ? layer.name() + " " + k : String.valueOf(name), c.x, c.y,
+                    desc == null ? null : String.valueOf(desc)));
+            k++;
+        }
+        return out;
+    }
+
+    /**
      * Writes a GPX 1.1 file atomically.
      *
      * @param target    the file

@@ -13,7 +13,7 @@ import java.util.Map;
  * @param index      zero-based position of the feature in the file (or layer)
  * @param name       the value of the first attribute called name/NAME/Name/title/id, else {@code "feature <index>"}
  * @param polygon    the Polygon or MultiPolygon
- * @param attributes the other attributes, in file order (unmodifiable)
+ * @param attributes all attributes of the feature (including the one used as name), in file order (unmodifiable)
  * @param repaired   whether the geometry was changed by the opt-in repair
  */
 public record PolygonFeature(int index, String name, Geometry polygon, Map<String, Object> attributes, boolean repaired) {

@@ -43,7 +43,8 @@ public final class ShapefilePolygons {
         return null;
     }
 
-    static List<PolygonFeature> read(Path shp, boolean repair) throws IOException {
+    /** Reads the polygons of a shapefile (see the class description); {@code repair} as in {@link PolygonFiles.Options}. */
+    public static List<PolygonFeature> read(Path shp, boolean repair) throws IOException {
         Path prj = sibling(shp, ".prj");
         if (prj != null) CrsCheck.requireGeographicWgs84(Files.readString(prj, StandardCharsets.ISO_8859_1), prj);
         Path dbf = sibling(shp, ".dbf");

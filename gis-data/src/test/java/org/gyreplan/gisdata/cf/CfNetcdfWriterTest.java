@@ -102,6 +102,12 @@ class CfNetcdfWriterTest {
         assertTrue(info.contains("Origin = (170.000000000000000,-26.000000000000000)"), info);
         assertTrue(info.contains("Pixel Size = (2.000000000000000,-2.000000000000000)"), info);
         assertTrue(info.contains("NoData Value=9.96921e+36"), info);
+        // values per band (one band per time step) at the centre of cell (i=3, j=1) = (177°E, 31°S)
+        String[] v = RealData.run("gdallocationinfo", "-valonly", "-geoloc", "NETCDF:" + f + ":tau_x", "177", "-31")
+                .trim().split("\\s+");
+        assertEquals(2, v.length);
+        assertEquals(value(0, 0, 3, 1), Double.parseDouble(v[0]), 1e-6 * value(0, 0, 3, 1));
+        assertEquals(value(0, 1, 3, 1), Double.parseDouble(v[1]), 1e-6 * value(0, 1, 3, 1));
     }
 
     @Test
@@ -147,6 +153,15 @@ class CfNetcdfWriterTest {
             assertEquals(CfNetcdfWriter.FILL, v[1], 0.0);
             assertEquals(3.0, v[5], 0.0);
             assertEquals(38.25, nc.variable("lat").readAll()[0], 0.0);
+        }
+        // the same file as netCDF-4 (nccopy): character arrays and fixed dimensions through the HDF5 reader
+        Path nc4 = tmp.resolve("stations4.nc");
+        RealData.run("nccopy", "-k", "nc4", f.toString(), nc4.toString());
+        try (NetcdfDataset nc = NetcdfDataset.open(nc4)) {
+            assertArrayEquals(new String[] {"Cape Aurora", "Port Lumen"}, nc.variable("station_name").readStrings());
+            assertEquals(List.of("station", "time"), nc.variable("cui").dimensionNames());
+            assertEquals(120.5, nc.variable("cui").readAll()[0], 0.0);
+            assertEquals("timeSeries", nc.globalAttribute("featureType").text());
         }
     }
 }

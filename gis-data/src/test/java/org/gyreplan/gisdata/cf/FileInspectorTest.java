@@ -56,4 +56,16 @@ class FileInspectorTest {
                 && v.interpretation().startsWith("surface altitude (positive up)")), s.toText());
         assertNull(s.time());
     }
+
+    @Test
+    void geoTiff(@TempDir Path tmp) throws IOException {
+        Path tif = tmp.resolve("e.tif");
+        RealData.run("gdal_translate", "-q", "-a_srs", "EPSG:4326", "NETCDF:" + RealData.file("etopo60.cdf") + ":ROSE", tif.toString());
+        FileInspector.FileSummary s = FileInspector.describe(tif);
+        assertEquals("GeoTIFF", s.format());
+        assertEquals(360, s.grid().nx());
+        assertEquals(20.0, s.grid().westDeg(), 1e-9); // gdalinfo: Origin = (20, 90)
+        assertTrue(s.grid().global());
+        assertTrue(s.toText().contains("CRS EPSG:4326"), s.toText());
+    }
 }

@@ -139,6 +139,25 @@ class GriddedSeriesRealDataTest {
     }
 
     @Test
+    void netcdf4CopyGivesTheSameSeries(@TempDir Path tmp) throws IOException {
+        Path classic = RealData.file("coads_climatology.cdf");
+        Path nc4 = tmp.resolve("coads4.nc");
+        RealData.run("nccopy", "-k", "nc4", "-d", "5", "-s", classic.toString(), nc4.toString());
+        BoundingBox box = new BoundingBox(-30, 20, -50, 10);
+        List<VariableRole> roles = List.of(VariableRole.EASTWARD_WIND, VariableRole.NORTHWARD_WIND, VariableRole.SEA_LEVEL_PRESSURE);
+        try (GriddedSeries a = GriddedSeries.open(classic, roles, VariableMapping.automatic(), box, null, null);
+             GriddedSeries b = GriddedSeries.open(nc4, roles, VariableMapping.automatic(), box, null, null)) {
+            assertTrue(a.grid().sameGeometry(b.grid()));
+            assertEquals(a.timeAxis(), b.timeAxis());
+            for (int k : new int[] {0, 7, 11}) {
+                for (int r = 0; r < 3; r++) {
+                    assertArrayEquals(a.read(k).fields().get(r).values(), b.read(k).fields().get(r).values(), 0.0);
+                }
+            }
+        }
+    }
+
+    @Test
     void descendingLatitudeAndKnotsAreNormalised(@TempDir Path tmp) throws IOException {
         // a copy of one COADS month with latitude north→south, longitudes −179…179, wind in knots
         Path f = tmp.resolve("desc.nc");
@@ -182,6 +201,46 @@ class GriddedSeriesRealDataTest {
                     double e = coadsU[(5 * 90 + row) * 180 + col];
                     // written as float knots, read back × 1852/3600: float rounding 1e-6 relative
                     near(e, got.at(i, j), "u at " + g.lonDeg(i) + "," + g.latDeg(j));
+                }
+            }
+        }
+    }
+
+    @Test
+    void regionalGridInZeroTo360WithLongitudeFirstAndABoxInMinus180To180(@TempDir Path tmp) throws IOException {
+        // invented regional file: lon 150.5 … 249.5 (0–360 convention), lat 10.5 … 39.5, dimension order (lon, lat),
+        // pressure in hPa = 1000 + lon/10 + lat/100 so every value tells its own position
+        Path f = tmp.resolve("regional.nc");
+        int nx = 100, ny = 30;
+        double[] lon = new double[nx], lat = new double[ny], p = new double[nx * ny];
+        for (int i = 0; i < nx; i++) lon[i] = 150.5 + i;
+        for (int j = 0; j < ny; j++) lat[j] = 10.5 + j;
+        for (int i = 0; i < nx; i++) for (int j = 0; j < ny; j++) p[i * ny + j] = 1000 + lon[i] / 10 + lat[j] / 100;
+        ClassicNetcdfWriter w = new ClassicNetcdfWriter();
+        w.dimension("x", nx).dimension("y", ny);
+        w.variable("x", DataType.DOUBLE, "x").text("units", "degrees_east");
+        w.variable("y", DataType.DOUBLE, "y").text("units", "degrees_north");
+        w.variable("msl", DataType.DOUBLE, "x", "y").text("units", "hPa");
+        AtomicWrite.toFile(f, q -> {
+            try (var out = w.open(q)) {
+                out.write("x", lon);
+                out.write("y", lat);
+                out.write("msl", p);
+            }
+        });
+        // box 170°W … 120°W = 190 … 240 in the file's convention
+        try (GriddedSeries s = GriddedSeries.open(f, List.of(VariableRole.SEA_LEVEL_PRESSURE), VariableMapping.automatic(),
+                new BoundingBox(-170, -120, 20, 30), null, null)) {
+            LonLatGrid g = s.grid();
+            assertEquals(-169.5, g.lon0Deg(), 1e-9);
+            assertEquals(50, g.nx());
+            assertEquals(20.5, g.lat0Deg(), 1e-9);
+            assertEquals(10, g.ny());
+            ScalarField got = s.read(0).fields().get(0);
+            for (int j = 0; j < g.ny(); j++) {
+                for (int i = 0; i < g.nx(); i++) {
+                    double expectedHpa = 1000 + (g.lonDeg(i) + 360) / 10 + g.latDeg(j) / 100;
+                    assertEquals(expectedHpa * 100, got.at(i, j), 1e-7, "Pa at " + g.lonDeg(i) + "," + g.latDeg(j));
                 }
             }
         }

@@ -51,6 +51,8 @@ class StationWindCsvTest {
         assertEquals(Instant.parse("2026-01-06T00:00:00Z"), s.time(4));
         assertEquals(0.0, s.eastwardMs(5), 0);
         assertEquals(0.0, s.northwardMs(5), 0);
+        assertEquals(-10 * KN, s.northwardSeries().value(0), TOL);
+        assertEquals(s.time(2), s.eastwardSeries().time(2));
     }
 
     @Test
@@ -67,6 +69,17 @@ class StationWindCsvTest {
         assertEquals(Instant.parse("2026-07-01T04:00:00Z"), t.time(0));
         assertEquals(Instant.parse("2026-07-01T08:00:00Z"), t.time(1));
         assertEquals(3.0, t.eastwardMs(1), 0);
+    }
+
+    @Test
+    void dailySeriesFromASpreadsheetExportWithByteOrderMark() throws Exception {
+        Path f = write("daily.csv", "\uFEFFdate;wind_speed (knots);wind_direction (deg);station\r\n"
+                + "2026-02-01;20;270;\"Cape; North\"\r\n2026-02-02;20;360;\"Cape; North\"\r\n");
+        StationWindSeries s = StationWindCsv.read(f);
+        assertEquals(Instant.parse("2026-02-02T00:00:00Z"), s.time(1));
+        assertEquals(20 * KN, s.eastwardMs(0), TOL);   // west wind blows eastward
+        assertEquals(-20 * KN, s.northwardMs(1), TOL); // 360° = north wind
+        assertEquals(0.0, s.eastwardMs(1), TOL);
     }
 
     @Test
@@ -110,6 +123,12 @@ class StationWindCsvTest {
         StationWindSeries cm = StationWindCsv.read(write("cm.csv", "time,u [cm/s],v [cm/s]\n2026-01-01T00:00Z,100,-50\n"));
         assertEquals(1.0, cm.eastwardMs(0), TOL);
         assertEquals(-0.5, cm.northwardMs(0), TOL);
+
+        CsvFormatException both = assertThrows(CsvFormatException.class, () -> StationWindCsv.read(write("both.csv",
+                "time,speed [m/s],direction,u [m/s],v [m/s]\n2026-01-01T00:00Z,5,10,1,2\n")));
+        assertEquals(Problem.AMBIGUOUS_COLUMNS, both.problem());
+        StationWindSeries chosen = StationWindCsv.read(both.file(), StationWindCsv.Options.DEFAULT.withComponents("u", "v"));
+        assertEquals(2.0, chosen.northwardMs(0), 0);
 
         CsvFormatException missing = assertThrows(CsvFormatException.class, () -> StationWindCsv.read(write("m.csv",
                 "time,pressure [hPa]\n2026-01-01T00:00Z,1013\n")));

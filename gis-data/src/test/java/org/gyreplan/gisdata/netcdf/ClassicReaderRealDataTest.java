@@ -121,6 +121,19 @@ class ClassicReaderRealDataTest {
     }
 
     @Test
+    void cdf2CopyByNccopyReadsIdentically(@TempDir Path tmp) throws IOException {
+        Path src = RealData.file("coads_climatology.cdf");
+        Path cdf2 = tmp.resolve("coads2.nc");
+        RealData.run("nccopy", "-k", "64-bit offset", src.toString(), cdf2.toString());
+        try (NetcdfDataset a = NetcdfDataset.open(src); NetcdfDataset b = NetcdfDataset.open(cdf2)) {
+            assertEquals(NetcdfFormat.OFFSET_64, b.format());
+            for (String v : new String[] {"UWND", "SLP", "COADSX", "TIME"}) {
+                assertArrayEquals(a.variable(v).readAll(), b.variable(v).readAll(), 0.0, v);
+            }
+        }
+    }
+
+    @Test
     void coordinateAxesMatchNcdump() throws IOException {
         try (NetcdfDataset nc = NetcdfDataset.open(RealData.file("coads_climatology.cdf"))) {
             double[] x = nc.variable("COADSX").readAll();

@@ -59,6 +59,12 @@ public final class RealData {
      * All values of one variable as printed by {@code ncdump -v var file} (row-major; "_" → NaN).
      */
     public static double[] ncdumpValues(Path file, String var) {
+        return CACHE.computeIfAbsent(file.toAbsolutePath() + "#" + var, k -> parseNcdump(file, var)).clone();
+    }
+
+    private static final java.util.Map<String, double[]> CACHE = new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static double[] parseNcdump(Path file, String var) {
         String out = run("ncdump", "-v", var, file.toString());
         int data = out.indexOf("\ndata:");
         int at = out.indexOf("\n " + var + " =", data);

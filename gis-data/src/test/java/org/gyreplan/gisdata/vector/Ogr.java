@@ -24,7 +24,9 @@ public final class Ogr {
     public record Run(int exit, String out, String err) {}
 
     public static Run run(String... command) throws IOException, InterruptedException {
-        for (String dir : System.getenv().getOrDefault("PATH", "/usr/bin").split(":")) {
+        String[] dirs = command[0].startsWith("/") ? new String[] {"/"}
+                : System.getenv().getOrDefault("PATH", "/usr/bin").split(":");
+        for (String dir : dirs) {
             if (Files.isExecutable(Path.of(dir, command[0]))) {
                 Process p = new ProcessBuilder(command).redirectInput(ProcessBuilder.Redirect.from(new java.io.File("/dev/null"))).start();
                 byte[] err;

@@ -162,6 +162,19 @@ class PolygonFilesTest {
         assertEquals(Problem.PROJECTED_CRS, e.problem());
         assertTrue(e.getMessage().contains("UTM"), e.getMessage());
         assertTrue(e.getMessage().contains("EPSG:4326"), e.getMessage());
+
+        // another geographic datum (ED50, whose WKT carries TOWGS84 shift parameters) is refused too
+        Path ed50 = dir.resolve("ed50.shp");
+        assertEquals(0, Ogr.run("ogr2ogr", "-f", "ESRI Shapefile", "-t_srs", "EPSG:4230", ed50.toString(), src.toString()).exit());
+        GeometryFileException other = assertThrows(GeometryFileException.class, () -> PolygonFiles.read(ed50));
+        assertEquals(Problem.UNSUPPORTED_CRS, other.problem());
+
+        // the unit checks themselves: WKT 2 of EPSG:4326 as GDAL prints it is accepted, WKT 1 with TOWGS84 refused
+        CrsCheck.requireGeographicWgs84("GEOGCRS[\"WGS 84\",ENSEMBLE[\"World Geodetic System 1984 ensemble\",MEMBER[\"World"
+                + " Geodetic System 1984 (Transit)\"]],CS[ellipsoidal,2],ID[\"EPSG\",4326]]", null);
+        assertThrows(GeometryFileException.class, () -> CrsCheck.requireGeographicWgs84("GEOGCS[\"ED50\",DATUM["
+                + "\"European_Datum_1950\",SPHEROID[\"International 1924\",6378388,297],TOWGS84[-87,-98,-121,0,0,0,0]],"
+                + "PRIMEM[\"Greenwich\",0],UNIT[\"degree\",0.0174532925199433]]", null));
     }
 
     @Test
@@ -202,5 +215,24 @@ class PolygonFilesTest {
                 () -> PolygonFiles.read(gpkg, PolygonFiles.Options.DEFAULT.withLayer("stations")));
         assertEquals(Problem.NOT_POLYGON, points.problem());
         assertEquals(2, PolygonFiles.read(gpkg, PolygonFiles.Options.DEFAULT.withLayer("more_zones")).size());
+    }
+
+    @Test
+    void legacyCrsMembersAndWktPrefixes() throws Exception {
+        String square = "\"coordinates\":[[[0,0],[1,0],[1,1],[0,1],[0,0]]]";
+        assertEquals(1.0, PolygonFiles.read(write("crs84.geojson", "{\"type\":\"Polygon\",\"crs\":{\"type\":\"name\","
+                + "\"properties\":{\"name\":\"urn:ogc:def:crs:OGC:1.3:CRS84\"}}," + square + "}")).get(0).polygon().getArea(), 0);
+        GeometryFileException utm = assertThrows(GeometryFileException.class, () -> PolygonFiles.read(write("crs.geojson",
+                "{\"type\":\"Polygon\",\"crs\":{\"type\":\"name\",\"properties\":{\"name\":\"urn:ogc:def:crs:EPSG::32631\"}},"
+                        + square + "}")));
+        assertEquals(Problem.UNSUPPORTED_CRS, utm.problem());
+        assertEquals(Problem.UNSUPPORTED_CRS, assertThrows(GeometryFileException.class,
+                () -> PolygonFiles.read(write("srid.wkt", "SRID=3857;POLYGON ((0 0, 1 0, 1 1, 0 0))"))).problem());
+        assertEquals(Problem.NOT_POLYGON, assertThrows(GeometryFileException.class,
+                () -> PolygonFiles.read(write("empty.wkt", "POLYGON EMPTY"))).problem());
+        GeometryFileException topo = assertThrows(GeometryFileException.class,
+                () -> PolygonFiles.read(write("topo.json", "{\"type\":\"Topology\",\"objects\":{},\"arcs\":[]}")));
+        assertEquals(Problem.UNSUPPORTED_FORMAT, topo.problem());
+        assertTrue(topo.getMessage().contains("TopoJSON"), topo.getMessage());
     }
 }

@@ -155,6 +155,25 @@ class VectorWritersTest {
     }
 
     @Test
+    void geoPackagePassesGdalsConformanceValidator() throws Exception {
+        // GDAL's validate_gpkg.py (python3-gdal, a dependency of Debian's gdal-bin) checks the requirements of the
+        // GeoPackage specification (OGC 12-128r18) one by one and exits non-zero on the first failure.
+        Path validator = Path.of("/usr/lib/python3/dist-packages/osgeo_utils/samples/validate_gpkg.py");
+        assertTrue(Files.exists(validator), "GDAL's validate_gpkg.py is missing: install Debian's gdal-bin (python3-gdal)");
+        Geometry across = Fixtures.GF.createPolygon(Fixtures.ring(170, -10, 190, -10, 190, 10, 170, 10, 170, -10));
+        FeatureLayer mixed = new FeatureLayer("mixed_zones", List.of(Feature.of(Fixtures.squareWithHole(), "name", "A"),
+                Feature.of(across, "name", "across 180")));
+        Path f = dir.resolve("valid.gpkg");
+        GeoPackageFiles.write(f, List.of(Fixtures.stations(), Fixtures.transects(), Fixtures.zones(), mixed));
+        Ogr.Run r = Ogr.run("/usr/bin/python3", validator.toString(), f.toString());
+        assertEquals(0, r.exit(), r.out() + r.err());
+        assertEquals("", r.out().strip() + r.err().strip());
+        Ogr.Layer l = Ogr.summary(f).get("mixed_zones");
+        assertEquals("Multi Polygon", l.geometry());
+        assertExtent(l, -180, -10, 180, 50);
+    }
+
+    @Test
     void geoPackageIsReproducible() throws Exception {
         Path a = dir.resolve("a.gpkg"), b = dir.resolve("b.gpkg");
         GeoPackageFiles.write(a, List.of(Fixtures.zones()));
@@ -196,6 +215,11 @@ class VectorWritersTest {
         assertEquals(54.5, Double.parseDouble(((Element) wp.item(0)).getAttribute("lat")), 0);
         assertEquals(-169.5, Double.parseDouble(((Element) wp.item(1)).getAttribute("lon")), 0);
         assertEquals(2, d.getElementsByTagNameNS(ns, "rtept").getLength());
+
+        List<GpxFiles.Waypoint> fromLayer = GpxFiles.waypoints(Fixtures.stations());
+        assertEquals("M1", fromLayer.get(0).name());
+        assertEquals(-33.5, fromLayer.get(1).latDeg(), 0);
+        assertThrows(IllegalArgumentException.class, () -> GpxFiles.waypoints(Fixtures.zones()));
     }
 
     @Test

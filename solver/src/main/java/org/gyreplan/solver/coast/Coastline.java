@@ -7,9 +7,11 @@ import org.gyreplan.solver.DegreeTrig;
 import org.gyreplan.solver.PhysicalConstants;
 import org.locationtech.jts.algorithm.Orientation;
 import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.LinearRing;
 import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.operation.linemerge.LineMerger;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -159,6 +161,30 @@ public final class Coastline {
         return rel > 0 ? right : new Coastline(right.lonDeg, right.latDeg, false, false, DEFAULT_SMOOTHING_KM, constants);
     }
 
+    /**
+     * Coastlines from several land line strings (a {@code LineString}, {@code MultiLineString} or collection): pieces
+     * whose ends touch are merged (JTS {@link LineMerger}), and the ocean side of each merged line is decided by the
+     * point at sea as in {@link #ofLand(LineString, double, double, PhysicalConstants)}. Lines are returned in a
+     * deterministic order (longest first).
+     */
+    public static List<Coastline> ofLandLines(Geometry lines, double seaLonDeg, double seaLatDeg,
+                                              PhysicalConstants constants) {
+        LineMerger merger = new LineMerger();
+        merger.add(Objects.requireNonNull(lines, "lines"));
+        List<Coastline> out = new ArrayList<>();
+        for (Object o : merger.getMergedLineStrings()) {
+            out.add(ofLand((LineString) o, seaLonDeg, seaLatDeg, constants));
+        }
+        if (out.isEmpty()) throw new IllegalArgumentException("no line strings in the coast geometry " + lines.getGeometryType());
+        out.sort((p, q) -> {
+            int c = Double.compare(q.lengthKm(), p.lengthKm());
+            if (c != 0) return c;
+            c = Double.compare(p.lonDeg[0], q.lonDeg[0]);
+            return c != 0 ? c : Double.compare(p.latDeg[0], q.latDeg[0]);
+        });
+        return out;
+    }
+
     private static Coastline ofRing(Coordinate[] c, boolean oceanOnRight, PhysicalConstants constants) {
         return new Coastline(lons(c), lats(c), true, oceanOnRight, DEFAULT_SMOOTHING_KM, constants);
     }
@@ -267,6 +293,17 @@ public final class Coastline {
             out.add(pointAt(String.format(java.util.Locale.ROOT, "km %.1f", sw), sw));
         }
         return out;
+    }
+
+    /**
+     * Index points every {@code spacingKm} along the stretch between the coast points nearest to two positions
+     * (in the coast's vertex order from the first position to the second; on a ring through the first vertex if
+     * needed). On an open line the positions may be given in either order.
+     */
+    public List<CoastPoint> pointsBetween(double spacingKm, double lon1Deg, double lat1Deg, double lon2Deg, double lat2Deg) {
+        double a = nearestAlongKm(lon1Deg, lat1Deg), b = nearestAlongKm(lon2Deg, lat2Deg);
+        if (!closed && b < a) { double t = a; a = b; b = t; }
+        return pointsEvery(spacingKm, a, b);
     }
 
     /** The along-coast distance (km) of the coast point nearest to (lon, lat). */

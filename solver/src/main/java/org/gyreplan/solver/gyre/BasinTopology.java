@@ -3,7 +3,6 @@ package org.gyreplan.solver.gyre;
 import org.gyreplan.solver.grid.LonLatGrid;
 
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 
 /**
@@ -55,13 +54,14 @@ public final class BasinTopology {
     /** Analyses the ocean mask of a grid. */
     public static BasinTopology of(LonLatGrid grid) {
         int nx = grid.nx(), ny = grid.ny(), n = nx * ny;
+        boolean[] ocean = grid.oceanMask();
         int[] comp = new int[n];
         java.util.Arrays.fill(comp, -1);
         int[] stack = new int[n];
         List<Integer> sizes = new ArrayList<>();
         int nComp = 0;
         for (int start = 0; start < n; start++) {
-            if (!grid.isOcean(start) || comp[start] >= 0) continue;
+            if (!ocean[start] || comp[start] >= 0) continue;
             int top = 0, size = 0;
             stack[top++] = start;
             comp[start] = nComp;
@@ -69,10 +69,10 @@ public final class BasinTopology {
                 int k = stack[--top];
                 size++;
                 int i = k % nx, j = k / nx;
-                int[] nb = {i > 0 ? k - 1 : -1, i < nx - 1 ? k + 1 : -1, j > 0 ? k - nx : -1, j < ny - 1 ? k + nx : -1};
-                for (int m : nb) {
-                    if (m >= 0 && grid.isOcean(m) && comp[m] < 0) { comp[m] = nComp; stack[top++] = m; }
-                }
+                if (i > 0 && ocean[k - 1] && comp[k - 1] < 0) { comp[k - 1] = nComp; stack[top++] = k - 1; }
+                if (i < nx - 1 && ocean[k + 1] && comp[k + 1] < 0) { comp[k + 1] = nComp; stack[top++] = k + 1; }
+                if (j > 0 && ocean[k - nx] && comp[k - nx] < 0) { comp[k - nx] = nComp; stack[top++] = k - nx; }
+                if (j < ny - 1 && ocean[k + nx] && comp[k + nx] < 0) { comp[k + nx] = nComp; stack[top++] = k + nx; }
             }
             sizes.add(size);
             nComp++;
@@ -97,30 +97,32 @@ public final class BasinTopology {
         java.util.Arrays.fill(islandOf, -1);
         List<Island> islands = new ArrayList<>();
         int nLand = 0;
+        int[] cells = new int[n];
         for (int start = 0; start < n; start++) {
             if (main[start] || land[start] >= 0) continue;
-            int top = 0;
+            int top = 0, count = 0;
             stack[top++] = start;
             land[start] = nLand;
-            List<Integer> cells = new ArrayList<>();
             boolean outer = false;
             while (top > 0) {
                 int k = stack[--top];
-                cells.add(k);
+                cells[count++] = k;
                 int i = k % nx, j = k / nx;
                 if (i == 0 || j == 0 || i == nx - 1 || j == ny - 1) outer = true;
                 for (int dj = -1; dj <= 1; dj++) {
+                    int jj = j + dj;
+                    if (jj < 0 || jj >= ny) continue;
                     for (int di = -1; di <= 1; di++) {
-                        int ii = i + di, jj = j + dj;
-                        if ((di == 0 && dj == 0) || ii < 0 || jj < 0 || ii >= nx || jj >= ny) continue;
+                        int ii = i + di;
+                        if ((di == 0 && dj == 0) || ii < 0 || ii >= nx) continue;
                         int m = jj * nx + ii;
                         if (!main[m] && land[m] < 0) { land[m] = nLand; stack[top++] = m; }
                     }
                 }
             }
             if (!outer) {
-                Collections.sort(cells);
-                int[] arr = cells.stream().mapToInt(Integer::intValue).toArray();
+                int[] arr = java.util.Arrays.copyOf(cells, count);
+                java.util.Arrays.sort(arr);
                 double lon = 0, lat = 0;
                 for (int k : arr) { lon += grid.lonDeg(k % nx); lat += grid.latDeg(k / nx); }
                 int id = islands.size();

@@ -17,7 +17,12 @@ import java.util.List;
  *   net transport of the row: Σ over all segments of ψ(east coast) − ψ(west coast), Sv (0 for a closed basin)
  * </pre>
  *
- * The coast sits at the centre of the first land cell (the discrete wall of {@link GyreSolver}).
+ * The coast sits at the centre of the first land cell (the discrete wall of {@link GyreSolver}). Sign: transports
+ * positive northward (V = ∂ψ/∂x); a subtropical gyre has a positive (northward) western boundary current in the
+ * northern hemisphere. Validity: the run-based definition assumes the boundary current of a row starts at the western
+ * coast of the row's longest segment; rows cut by islands or bays report their longest segment only. The e-folding and
+ * zero-crossing widths follow the Stommel (1948) exponential and Munk (1950) oscillatory profiles (for Munk no-slip
+ * walls the zero crossing is at 2π/√3 δ_M, CHECKS.md §8b). Speeds are depth means over H, not surface speeds.
  */
 public final class BoundaryCurrentDiagnostics {
     /** Diagnostics of one grid row (NaN where undefined). */

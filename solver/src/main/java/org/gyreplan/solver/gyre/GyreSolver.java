@@ -1,6 +1,5 @@
 package org.gyreplan.solver.gyre;
 
-import org.gyreplan.solver.DegreeTrig;
 import org.gyreplan.solver.PhysicalConstants;
 import org.gyreplan.solver.grid.LonLatGrid;
 import org.gyreplan.solver.grid.ScalarField;
@@ -90,7 +89,8 @@ public final class GyreSolver {
             StencilMatrix A = op.matrix();
             cancel.check();
             listener.progress(STAGE, 0.02, "building multigrid hierarchy");
-            Multigrid mg = new Multigrid(A, par, 1, 1, 1);
+            int[] cyc = cycleParameters(op.R);
+            Multigrid mg = new Multigrid(A, par, cyc[0], cyc[1], cyc[2]);
             int n = A.size();
             int nSolves = 1 + islands.size();
             int[] iters = new int[nSolves];
@@ -154,6 +154,13 @@ public final class GyreSolver {
         } finally {
             par.shutdown();
         }
+    }
+
+    /** {pre-sweeps, post-sweeps, cycle index} of the multigrid preconditioner for a stencil radius. */
+    static int[] cycleParameters(int radius) {
+        // drag only (5-point): V(1,1); with the biharmonic term: W(1,1), which keeps the iteration count from growing
+        // quickly under refinement (bilinear transfers are only just adequate for a fourth-order operator)
+        return radius == 1 ? new int[] {1, 1, 1} : new int[] {1, 1, 2};
     }
 
     /** curl τ/ρ₀ per cell (m s⁻²); checks main-basin cells, fills island cells from adjacent ocean if undefined. */

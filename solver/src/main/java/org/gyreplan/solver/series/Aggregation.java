@@ -17,6 +17,7 @@ import java.util.Objects;
  * from the one containing the first sample to the one containing the last, empty periods included (mean NaN,
  * count 0). The {@link Coverage} rule decides which means are accepted. Sample times are treated as instants: a
  * monthly mean stamped at mid-month falls in its month; a daily mean stamped at 00:00 in its day.
+ * Source: arithmetic means with a minimum-coverage rule, common practice (the 80 % default is a stated choice).
  */
 public final class Aggregation {
     private Aggregation() {}

@@ -15,6 +15,10 @@ import java.time.ZoneOffset;
  * </pre>
  * A missing day (NaN, or a day without a sample) ends a run and is not counted as valid. Sub-daily input is
  * averaged to days first with {@link Coverage#DEFAULT}.
+ * <p>Sign: favourable means a positive index (offshore Ekman transport). Validity: daily values; runs depend on the
+ * index threshold (0 here). Source: counting favourable days and runs is common practice in upwelling phenology
+ * (e.g. the duration indicators discussed by Bograd et al. 2009, GRL 36, L01602); the exact statistics here are
+ * our own definitions, stated above.
  *
  * @param validDays            days with a value
  * @param favourableDays       days with UI &gt; 0

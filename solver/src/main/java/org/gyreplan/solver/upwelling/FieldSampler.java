@@ -8,7 +8,7 @@ import java.util.Arrays;
 
 /**
  * Samples a grid at one position by {@link StressSampling#NEAREST_OCEAN} or {@link StressSampling#BILINEAR},
- * reporting the great-circle distance (km) to the cell used. The candidate cells are sorted once per position and
+ * using only cells that are ocean in the grid mask and have finite values, reporting the great-circle distance (km) to the cell used. The candidate cells are sorted once per position and
  * grid, so sampling a long series costs little per step.
  */
 final class FieldSampler {
@@ -65,7 +65,9 @@ final class FieldSampler {
             if (nearest == null) sortCandidates();
             for (int r = 0; r < nearest.length; r++) {
                 int k = nearest[r];
-                if (Double.isFinite(va[k]) && Double.isFinite(vb[k])) return new Sample(va[k], vb[k], nearestKm[r]);
+                if (grid.isOcean(k) && Double.isFinite(va[k]) && Double.isFinite(vb[k])) {
+                    return new Sample(va[k], vb[k], nearestKm[r]);
+                }
             }
             return new Sample(Double.NaN, Double.NaN, Double.NaN);
         }
@@ -78,7 +80,7 @@ final class FieldSampler {
                 int i = i0 + di, j = j0 + dj;
                 if (i < 0 || i >= grid.nx() || j < 0 || j >= grid.ny()) continue;
                 int k = grid.index(i, j);
-                if (!Double.isFinite(va[k]) || !Double.isFinite(vb[k])) continue;
+                if (!grid.isOcean(k) || !Double.isFinite(va[k]) || !Double.isFinite(vb[k])) continue;
                 double wt = (di == 0 ? 1 - fx : fx) * (dj == 0 ? 1 - fy : fy);
                 sa += wt * va[k];
                 sb += wt * vb[k];

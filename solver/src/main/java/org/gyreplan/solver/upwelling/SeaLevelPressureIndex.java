@@ -52,9 +52,11 @@ import java.util.function.IntFunction;
  * <p>The steps are those of {@link GeostrophicWind}, {@link GradientWind}, {@link SurfaceWindFromGeostrophic} and
  * {@link WindStress} with a {@link ConstantDrag}; this class chains them with the coast geometry.
  * <p><b>Field form</b>: ∇p from {@link SphericalOperators#gradient} (centred, one-sided next to missing values,
- * periodic in longitude on global grids); for the curvature correction the second derivatives are the gradient of
- * the gradient and the isobar curvature is κ = (p_xx p_y² − 2 p_xy p_x p_y + p_yy p_x²)/|∇p|³, r = 1/κ (metric
- * terms of order 1/R neglected against 1/r); where κ is undefined the isobars are taken as straight. The stress
+ * periodic in longitude on global grids); for the curvature correction the isobar's geodesic curvature is
+ * κ = (H_xx p_y² − 2 H_xy p_x p_y + H_yy p_x²)/|∇p|³, r = 1/κ, with the covariant Hessian on the sphere
+ * H_xx = ∂ₓ(p_x) − (tan φ/R) p_y, H_yy = ∂ᵧ(p_y), H_xy = ½[∂ᵧ(p_x) + ∂ₓ(p_y) + (tan φ/R) p_x], the derivatives of the
+ * gradient components again by {@link SphericalOperators#gradient}; where κ is undefined the isobars are taken
+ * as straight. The stress
  * field is then sampled at the points as configured in the {@link CoastalUpwellingIndex}.
  * <p><b>Source</b>: Bakun (1973), "Coastal upwelling indices, west coast of North America, 1946–71", NOAA Tech.
  * Rep. NMFS SSRF-671 (method and parameters from memory); geostrophic and gradient wind: Holton, An Introduction
@@ -144,7 +146,8 @@ public final class SeaLevelPressureIndex {
     /**
      * Signed radius of curvature of the isobar, m: positive when the isobar curves around lower pressure
      * (cyclonic), negative around higher pressure, infinite for straight isobars or when undefined.
-     * <pre>  κ = (p_xx p_y² − 2 p_xy p_x p_y + p_yy p_x²) / |∇p|³,   r = 1/κ</pre>
+     * <pre>  κ = (H_xx p_y² − 2 H_xy p_x p_y + H_yy p_x²) / |∇p|³,   r = 1/κ</pre>
+     * with (p_x, p_y) the gradient and H the Hessian of the pressure (Pa m⁻²) in local east/north coordinates.
      */
     static double curvatureRadius(double px, double py, double pxx, double pyy, double pxy) {
         double g2 = px * px + py * py;
@@ -189,8 +192,12 @@ public final class SeaLevelPressureIndex {
         for (int j = 0; j < g.ny(); j++) {
             for (int i = 0; i < g.nx(); i++) {
                 int k = g.index(i, j);
-                double r = pxx == null ? Double.POSITIVE_INFINITY
-                        : curvatureRadius(px[k], py[k], pxx[k], pyy[k], 0.5 * (pxy[k] + pyx[k]));
+                double r = Double.POSITIVE_INFINITY;
+                if (pxx != null) {
+                    double t = Math.tan(Math.toRadians(g.latDeg(j))) / g.radius();
+                    r = curvatureRadius(px[k], py[k], pxx[k] - t * py[k], pyy[k],
+                            0.5 * (pxy[k] + pyx[k] + t * px[k]));
+                }
                 double[] w = Double.isFinite(p[k]) ? surfaceWind(px[k], py[k], g.latDeg(j), r) : null;
                 if (w == null) { ue[k] = Double.NaN; vn[k] = Double.NaN; continue; }
                 if (asStress) {

@@ -149,4 +149,26 @@ class CoastlineTest {
         LineString line = GF.createLineString(new Coordinate[] {new Coordinate(0, 0), new Coordinate(0, 1)});
         assertThrows(IllegalArgumentException.class, () -> Coastline.ofLand(line, OceanSide.LEFT, C).withSmoothingLengthKm(-5));
     }
+
+    @Test
+    void severalLandLinesAreMergedAndEachGetsItsOceanSide() {
+        // two touching pieces of a meridional coast (given in opposite directions) and a separate island coast
+        LineString a = GF.createLineString(new Coordinate[] {new Coordinate(-120, 30), new Coordinate(-120, 35)});
+        LineString b = GF.createLineString(new Coordinate[] {new Coordinate(-120, 40), new Coordinate(-120, 35)});
+        LineString far = GF.createLineString(new Coordinate[] {new Coordinate(-130, 20), new Coordinate(-130, 21)});
+        List<Coastline> cs = Coastline.ofLandLines(GF.createMultiLineString(new LineString[] {a, b, far}), -125, 33, C);
+        assertEquals(2, cs.size());
+        assertEquals(6371.0 * Math.toRadians(10), cs.get(0).lengthKm(), 1e-6);
+        for (CoastPoint p : cs.get(0).pointsEvery(100, 0, cs.get(0).lengthKm())) {
+            assertEquals(270.0, p.offshoreBearingDeg(), 1e-9);
+        }
+        // the sea point lies east of the far line: its ocean is to the east
+        assertEquals(90.0, cs.get(1).pointAt("x", 50).offshoreBearingDeg(), 1e-9);
+        // a stretch between two positions, in either order
+        List<CoastPoint> s1 = cs.get(0).pointsBetween(50, -121, 36, -121, 33);
+        assertEquals(7, s1.size());
+        // foot of the perpendicular from (121°W, 33°N) on the 120°W meridian: tan φ = tan 33° / cos 1° (Napier's rules)
+        assertEquals(Math.toDegrees(Math.atan(Math.tan(Math.toRadians(33)) / Math.cos(Math.toRadians(1)))),
+                s1.get(0).latDeg(), 1e-7);
+    }
 }

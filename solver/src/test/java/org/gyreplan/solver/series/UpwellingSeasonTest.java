@@ -37,6 +37,10 @@ class UpwellingSeasonTest {
         assertEquals(11_618.35, s.totalUpwelling(), 11_618.35 * 1e-4);
         assertEquals(LocalDate.of(YEAR, 4, 16), s.springTransitionDate());
         assertEquals(365, s.cumulative().length);
+        TimeSeries cui = s.cumulativeSeries("CUI", "m3 s-1 (100 m)-1 day");
+        assertEquals(365, cui.size());
+        assertEquals(java.time.Instant.parse("2001-01-02T00:00:00Z"), cui.time(0));   // end of 1 January
+        assertEquals(s.cumulative()[287] - s.cumulative()[105], s.totalUpwelling(), 1e-9);
     }
 
     @Test
@@ -136,5 +140,32 @@ class UpwellingSeasonTest {
         assertEquals(2, s.size());
         assertEquals(YEAR + 1, s.get(1).year());
         assertEquals(s.get(0).totalUpwelling(), s.get(1).totalUpwelling(), 1e-9);
+    }
+
+    @Test
+    void seasonYearsMayStartInJulyForSeasonsAcrossTheTurnOfTheYear() {
+        // the synthetic cycle shifted to start on 1 July 2001: with season years from July the dates are the same
+        // days of the season year (STI 106 ± 1 → 14 October ± 1), with calendar years the season is cut in two
+        double[] v = new double[365 + 365];
+        double[] one = synthetic();
+        System.arraycopy(one, 0, v, 0, 365);
+        System.arraycopy(one, 0, v, 365, 365);
+        TimeSeries s = TimeSeries.daily("UI", "u", LocalDate.of(2001, 7, 1), v);
+        UpwellingSeason.Options july = UpwellingSeason.Options.DEFAULT.withStartMonth(7);
+        UpwellingSeason.Season a = UpwellingSeason.ofYear(s, 2001, july);
+        assertEquals(UpwellingSeason.Status.RESOLVED, a.status());
+        assertEquals(LocalDate.of(2001, 7, 1), a.startDate());
+        assertEquals(106, a.springTransitionDay(), 1.0);
+        assertEquals(288, a.endDay(), 1.0);
+        assertEquals(11_618.35, a.totalUpwelling(), 11_618.35 * 1e-4);
+        assertEquals(LocalDate.of(2001, 7, 1).plusDays(105), a.springTransitionDate());
+        // per season year: the 730 days are exactly the season years 2001/02 and 2002/03
+        List<UpwellingSeason.Season> all = UpwellingSeason.perYear(s, july);
+        assertEquals(List.of(2001, 2002), all.stream().map(UpwellingSeason.Season::year).toList());
+        assertEquals(a.totalUpwelling(), all.get(1).totalUpwelling(), 1e-9);
+        // with calendar years, 2002 holds the end of one cycle and the start of the next: CUI max before its min
+        UpwellingSeason.Season cal = UpwellingSeason.ofYear(s, 2002, UpwellingSeason.Options.DEFAULT);
+        assertEquals(UpwellingSeason.Status.NOT_RESOLVED, cal.status(), cal.reason());
+        assertThrows(IllegalArgumentException.class, () -> UpwellingSeason.Options.DEFAULT.withStartMonth(13));
     }
 }

@@ -139,6 +139,24 @@ class CoastalUpwellingIndexTest {
     }
 
     @Test
+    void landCellsOfTheGridMaskAreNotSampledEvenWithFiniteValues() {
+        // wind products often carry values over land; the grid mask decides what is ocean
+        LonLatGrid g0 = new LonLatGrid(20, 10, 230.5, 30.5, 1, 1, 6.371e6, null);
+        boolean[] ocean = new boolean[g0.size()];
+        for (int j = 0; j < g0.ny(); j++) for (int i = 0; i < 10; i++) ocean[g0.index(i, j)] = true;
+        LonLatGrid g = g0.withOcean(ocean);
+        double[] tx = new double[g.size()], ty = new double[g.size()];
+        for (int k = 0; k < g.size(); k++) ty[k] = g.isOcean(k) ? -0.1 : +0.3;   // land values would flip the sign
+        VectorField st = new VectorField(new ScalarField(g, tx, "tx", "Pa", null), new ScalarField(g, ty, "ty", "Pa", null));
+        CoastPoint p = CoastPoint.of("coast", 240.3, 35.5, 270);
+        for (StressSampling s : StressSampling.values()) {
+            PointIndex r = UI.withSampling(s).atPoints(st, List.of(p)).get(0);
+            assertEquals(-0.1, r.tauNorthwardPa(), 1e-15, s.name());
+            assertTrue(r.indexM3PerSPer100m() > 0, s.name());
+        }
+    }
+
+    @Test
     void rejectsStressInWrongUnits() {
         LonLatGrid g = new LonLatGrid(2, 2, 0.5, 30.5, 1, 1, 6.371e6, null);
         VectorField wind = new VectorField(new ScalarField(g, new double[4], "u", "m s-1", null),

@@ -62,6 +62,21 @@ class SeaLevelPressureIndexTest {
     }
 
     @Test
+    void southernMirrorOfAPressureFieldGivesTheSameIndex() {
+        // Reflection y → −y: latitude, ∂p/∂y and the northward part of the offshore normal change sign; the
+        // hemisphere-aware turning must keep the index identical (property; UI-01 ↔ UI-04 are one such pair in form).
+        java.util.Random r = new java.util.Random(5L);
+        for (int k = 0; k < 200; k++) {
+            double px = 2e-3 * r.nextGaussian(), py = 2e-3 * r.nextGaussian();
+            double lat = 6 + 70 * r.nextDouble(), b = 360 * r.nextDouble();
+            double north = CLASSIC.fromGradient(px, py, lat, b), south = CLASSIC.fromGradient(px, -py, -lat, 180 - b);
+            assertEquals(north, south, 1e-10 * Math.max(1, Math.abs(north)));
+            // and rotating the coast by 180° flips it
+            assertEquals(-north, CLASSIC.fromGradient(px, py, lat, b + 180), 1e-10 * Math.max(1, Math.abs(north)));
+        }
+    }
+
+    @Test
     void turningIsTowardLowPressure() {
         // CHECKS pitfall 5: the surface wind has a component down the pressure gradient in both hemispheres.
         for (double lat : new double[] {-50, -20, 20, 50}) {
@@ -129,5 +144,42 @@ class SeaLevelPressureIndexTest {
         double r = SeaLevelPressureIndex.curvatureRadius(a * x, a * y, a, a, 0);
         assertEquals(5e5, r, 1e-6);
         assertEquals(-5e5, SeaLevelPressureIndex.curvatureRadius(-a * x, -a * y, -a, -a, 0), 1e-6);
+    }
+
+    @Test
+    void fieldFormGradientWindAroundACircularLowAndHigh() {
+        // p = p0 ± a ρ²/2 with ρ the great-circle distance from a centre C 500 km south-west of the test cell P (so both gradient components and the metric terms of the Hessian matter): the isobars
+        // are geodesic circles of geodesic curvature κ = cot(ρ/R)/R, so the gradient-wind radius is R tan(ρ/R)
+        // (spherical geometry); V_g = aρ/(ρₐ|f|). Expected speed = 0.7 × GradientWind (Holton ch. 3; CHECKS §5 formulas).
+        PhysicalConstants c = PhysicalConstants.DEFAULT;
+        double dl = 0.05, latP = 40.0, lonP = -30.0, rho0 = 500e3, R = c.earthRadius();
+        LonLatGrid grid = new LonLatGrid(21, 21, lonP - 10 * dl, latP - 10 * dl, dl, dl, R, null);
+        net.sf.geographiclib.GeodesicData centre = new net.sf.geographiclib.Geodesic(R, 0).Direct(latP, lonP, 225, rho0);
+        double f = Math.abs(c.coriolis(latP));
+        double a = 10.0 * c.rhoAir() * f / rho0;          // V_g = 10 m/s at P
+        double rc = R * Math.tan(rho0 / R);
+        for (int sign : new int[] {1, -1}) {
+            double[] p = new double[grid.size()];
+            for (int j = 0; j < grid.ny(); j++) {
+                for (int i = 0; i < grid.nx(); i++) {
+                    double rho = 1000 * org.gyreplan.solver.upwelling.FieldSamplerAccess.greatCircleKm(
+                            centre.lon2, centre.lat2, grid.lonDeg(i), grid.latDeg(j), R);
+                    p[grid.index(i, j)] = 101_000 + sign * a * rho * rho / 2;
+                }
+            }
+            ScalarField slp = new ScalarField(grid, p, "slp", "Pa", null);
+            SeaLevelPressureIndex g = new SeaLevelPressureIndex(PressureWindMethod.CLASSIC.withGradientWindCorrection(true),
+                    CoastalUpwellingIndex.defaults());
+            VectorField w = g.surfaceWind(slp);
+            double speed = Math.hypot(w.eastward().at(10, 10), w.northward().at(10, 10));
+            org.gyreplan.solver.atmos.GradientWind gw = sign > 0
+                    ? org.gyreplan.solver.atmos.GradientWind.aroundLow(10.0, rc, latP, c)
+                    : org.gyreplan.solver.atmos.GradientWind.aroundHigh(10.0, rc, latP, c);
+            assertEquals(0.7 * gw.speed(), speed, 0.7 * gw.speed() * 1e-4, sign > 0 ? "low" : "high");
+            // and without the correction: 0.7 × V_g
+            double plain = Math.hypot(SeaLevelPressureIndex.classic().surfaceWind(slp).eastward().at(10, 10),
+                    SeaLevelPressureIndex.classic().surfaceWind(slp).northward().at(10, 10));
+            assertEquals(7.0, plain, 7.0 * 1e-4);
+        }
     }
 }

@@ -115,4 +115,5 @@ public final class Krylov {
         double trueRes = Math.sqrt(dot(r, r, par)) / bnorm;
         return new Result(it, trueRes, trueRes <= 10 * tol);
     }
+
 }

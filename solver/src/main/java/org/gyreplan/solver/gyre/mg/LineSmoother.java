@@ -12,54 +12,81 @@ package org.gyreplan.solver.gyre.mg;
  * changing the result. Line relaxation in x treats the zonal coupling exactly: the β ∂ψ/∂x term (which carries
  * information westward and builds the western boundary layer) and the stronger zonal coupling of lon–lat grids
  * where Δx = R cos φ Δλ is smaller than Δy. The row band matrices are factorised once (LU without pivoting, valid
- * because the symmetric part of the operator is positive definite).
+ * because the symmetric part of the operator is positive definite); factors are stored as separate arrays
+ * (sub-diagonals of L, inverse diagonal and super-diagonals of U).
  */
 final class LineSmoother {
     private final StencilMatrix A;
-    private final double[] lu;     // per node: w band entries (L below the diagonal, U on and above it; 1/diag stored)
-    private final int w;
     private final int R;
+    private final double[] l1, l2, dinv, u1, u2;    // l2/u2 only for radius 2
+    private final int[] offRowSlots;                 // stencil slots with dj ≠ 0 that are stored
+    private final boolean[] rowActive;
 
     LineSmoother(StencilMatrix A) {
         this.A = A;
         this.R = A.radius;
-        this.w = 2 * R + 1;
-        int nx = A.nx, ny = A.ny;
-        lu = new double[nx * ny * w];
+        if (R > 2) throw new IllegalArgumentException("line smoother supports stencil radius 1 or 2");
+        int nx = A.nx, ny = A.ny, n = nx * ny;
+        l1 = new double[n]; dinv = new double[n]; u1 = new double[n];
+        l2 = R == 2 ? new double[n] : null;
+        u2 = R == 2 ? new double[n] : null;
+        double[] cW2 = R == 2 ? A.a[A.slot(-2, 0)] : null, cW1 = A.a[A.slot(-1, 0)], cC = A.a[A.slot(0, 0)];
+        double[] cE1 = A.a[A.slot(1, 0)], cE2 = R == 2 ? A.a[A.slot(2, 0)] : null;
+        rowActive = new boolean[ny];
+        // band entries in place: l2 ← A(i,i−2), l1 ← A(i,i−1), dinv ← A(i,i), u1 ← A(i,i+1), u2 ← A(i,i+2)
         for (int j = 0; j < ny; j++) {
-            int base = j * nx;
             for (int i = 0; i < nx; i++) {
-                int k = base + i;
-                for (int d = -R; d <= R; d++) {
-                    double v;
-                    if (!A.active[k]) v = d == 0 ? 1.0 : 0.0;
-                    else if (i + d < 0 || i + d >= nx) v = 0.0;
-                    else v = A.get(k, d, 0);
-                    lu[k * w + d + R] = v;
+                int k = j * nx + i;
+                if (!A.active[k]) { dinv[k] = 1.0; continue; }
+                rowActive[j] = true;
+                if (cW1 != null && i >= 1) l1[k] = cW1[k];
+                if (cE1 != null && i + 1 < nx) u1[k] = cE1[k];
+                dinv[k] = cC == null ? 0.0 : cC[k];
+                if (R == 2) {
+                    if (cW2 != null && i >= 2) l2[k] = cW2[k];
+                    if (cE2 != null && i + 2 < nx) u2[k] = cE2[k];
                 }
             }
-            // banded LU of the row, no pivoting
+            // LU without pivoting, row by row (Doolittle on the band)
             for (int i = 0; i < nx; i++) {
-                int k = base + i;
-                double piv = lu[k * w + R];
+                int k = j * nx + i;
+                if (R == 1) {
+                    if (i >= 1) {
+                        double f = l1[k] * dinv[k - 1];          // dinv[k−1] already inverted
+                        l1[k] = f;
+                        dinv[k] -= f * u1[k - 1];
+                    }
+                } else {
+                    if (i >= 2) {
+                        double f2 = l2[k] * dinv[k - 2];
+                        l2[k] = f2;
+                        l1[k] -= f2 * u1[k - 2];
+                        dinv[k] -= f2 * u2[k - 2];
+                    }
+                    if (i >= 1) {
+                        double f1 = l1[k] * dinv[k - 1];
+                        l1[k] = f1;
+                        dinv[k] -= f1 * u1[k - 1];
+                        u1[k] -= f1 * u2[k - 1];
+                    }
+                }
+                double piv = dinv[k];
                 if (piv == 0.0 || !Double.isFinite(piv)) {
                     throw new ArithmeticException("zero pivot in line relaxation at lattice node (" + i + "," + j + ")");
                 }
-                double inv = 1.0 / piv;
-                for (int q = 1; q <= R && i + q < nx; q++) {
-                    int kq = k + q;
-                    double f = lu[kq * w + (-q + R)] * inv;
-                    lu[kq * w + (-q + R)] = f;
-                    if (f == 0.0) continue;
-                    for (int d = 1; d <= R; d++) {
-                        int dd = d - q;           // column i+d seen from row i+q
-                        if (dd > R) continue;
-                        lu[kq * w + dd + R] -= f * lu[k * w + d + R];
-                    }
-                }
-                lu[k * w + R] = inv;
+                dinv[k] = 1.0 / piv;
             }
         }
+        int cnt = 0;
+        int[] tmp = new int[A.a.length];
+        for (int dj = -R; dj <= R; dj++) {
+            if (dj == 0) continue;
+            for (int di = -R; di <= R; di++) {
+                int s = A.slot(di, dj);
+                if (A.a[s] != null) tmp[cnt++] = s;
+            }
+        }
+        offRowSlots = java.util.Arrays.copyOf(tmp, cnt);
     }
 
     /** One sweep over all colours, in forward ({@code reverse=false}) or reverse colour order. */
@@ -79,38 +106,27 @@ final class LineSmoother {
     }
 
     private void relaxRow(int j, double[] b, double[] x) {
+        if (!rowActive[j]) return;
         int nx = A.nx;
         int k0 = j * nx, k1 = k0 + nx;
-        boolean any = false;
-        for (int k = k0; k < k1; k++) if (A.active[k]) { any = true; break; }
-        if (!any) return;
-        // right-hand side: b minus the couplings to other rows (written into x's row, in-row values not needed)
-        for (int k = k0; k < k1; k++) x[k] = A.active[k] ? b[k] : 0.0;
-        double[][] a = A.a;
-        for (int dj = -R; dj <= R; dj++) {
-            if (dj == 0) continue;
-            for (int di = -R; di <= R; di++) {
-                int s = A.slot(di, dj);
-                double[] cs = a[s];
-                if (cs == null) continue;
-                int off = A.offset[s];
-                int lo = Math.max(k0, -off), hi = Math.min(k1, A.nx * A.ny - off);
-                for (int k = lo; k < hi; k++) x[k] -= cs[k] * x[k + off];
-            }
+        boolean[] act = A.active;
+        // right-hand side: b minus the couplings to other rows (in-row values of x are not needed)
+        for (int k = k0; k < k1; k++) x[k] = act[k] ? b[k] : 0.0;
+        for (int s : offRowSlots) {
+            double[] cs = A.a[s];
+            int off = A.offset[s];
+            for (int k = k0 + R; k < k1 - R; k++) x[k] -= cs[k] * x[k + off];
         }
-        // forward substitution with L (unit diagonal)
-        for (int i = 0; i < nx; i++) {
-            int k = k0 + i;
-            double v = x[k];
-            for (int q = 1; q <= R && i - q >= 0; q++) v -= lu[k * w + (-q + R)] * x[k - q];
-            x[k] = v;
-        }
-        // back substitution with U
-        for (int i = nx - 1; i >= 0; i--) {
-            int k = k0 + i;
-            double v = x[k];
-            for (int d = 1; d <= R && i + d < nx; d++) v -= lu[k * w + d + R] * x[k + d];
-            x[k] = v * lu[k * w + R];
+        if (R == 1) {
+            for (int k = k0 + 1; k < k1; k++) x[k] -= l1[k] * x[k - 1];
+            x[k1 - 1] *= dinv[k1 - 1];
+            for (int k = k1 - 2; k >= k0; k--) x[k] = (x[k] - u1[k] * x[k + 1]) * dinv[k];
+        } else {
+            x[k0 + 1] -= l1[k0 + 1] * x[k0];
+            for (int k = k0 + 2; k < k1; k++) x[k] -= l1[k] * x[k - 1] + l2[k] * x[k - 2];
+            x[k1 - 1] *= dinv[k1 - 1];
+            x[k1 - 2] = (x[k1 - 2] - u1[k1 - 2] * x[k1 - 1]) * dinv[k1 - 2];
+            for (int k = k1 - 3; k >= k0; k--) x[k] = (x[k] - u1[k] * x[k + 1] - u2[k] * x[k + 2]) * dinv[k];
         }
     }
 }

@@ -106,55 +106,53 @@ public final class Multigrid {
 
     // ---- transfer operators ---------------------------------------------------------------------------------
 
-    /** r_c = Pᵀ r (gather over the 3×3 fine nodes around 2I, 2J). */
+    /**
+     * r_c = Pᵀ r (gather over the 3×3 fine nodes around 2I, 2J). Vectors vanish on inactive nodes, so no fine mask
+     * test is needed; inactive coarse nodes get 0.
+     */
     static void restrict(StencilMatrix fine, StencilMatrix coarse, double[] r, double[] rc, Parallel par) {
-        int nxc = coarse.nx, nyc = coarse.ny, nxf = fine.nx, nyf = fine.ny;
+        int nxc = coarse.nx, nyc = coarse.ny, nxf = fine.nx, R = coarse.radius;
         par.forEach((nyc + 7) / 8, ch -> {
             int J0 = ch * 8, J1 = Math.min(nyc, J0 + 8);
             for (int J = J0; J < J1; J++) {
+                int kc0 = J * nxc;
+                if (J < R || J >= nyc - R) { java.util.Arrays.fill(rc, kc0, kc0 + nxc, 0.0); continue; }
+                int fm = (2 * J - 1) * nxf, f0 = 2 * J * nxf, fp = (2 * J + 1) * nxf;
                 for (int I = 0; I < nxc; I++) {
-                    int kc = J * nxc + I;
+                    int kc = kc0 + I;
                     if (!coarse.active[kc]) { rc[kc] = 0.0; continue; }
-                    double s = 0;
-                    for (int fy = 2 * J - 1; fy <= 2 * J + 1; fy++) {
-                        if (fy < 0 || fy >= nyf) continue;
-                        double wy = fy == 2 * J ? 1.0 : 0.5;
-                        for (int fx = 2 * I - 1; fx <= 2 * I + 1; fx++) {
-                            if (fx < 0 || fx >= nxf) continue;
-                            int kf = fy * nxf + fx;
-                            if (!fine.active[kf]) continue;
-                            double wx = fx == 2 * I ? 1.0 : 0.5;
-                            s += wx * wy * r[kf];
-                        }
-                    }
-                    rc[kc] = s;
+                    int fx = 2 * I;
+                    double tm = r[fm + fx] + 0.5 * (r[fm + fx - 1] + r[fm + fx + 1]);
+                    double t0 = r[f0 + fx] + 0.5 * (r[f0 + fx - 1] + r[f0 + fx + 1]);
+                    double tp = r[fp + fx] + 0.5 * (r[fp + fx - 1] + r[fp + fx + 1]);
+                    rc[kc] = t0 + 0.5 * (tm + tp);
                 }
             }
         });
     }
 
-    /** x += P x_c on active fine nodes. */
+    /** x += P x_c on active fine nodes (x_c vanishes on inactive coarse nodes). */
     static void prolongAdd(StencilMatrix fine, StencilMatrix coarse, double[] xc, double[] x, Parallel par) {
-        int nxc = coarse.nx, nxf = fine.nx, nyf = fine.ny;
+        int nxc = coarse.nx, nyc = coarse.ny, nxf = fine.nx, nyf = fine.ny;
         par.forEach((nyf + 15) / 16, ch -> {
             int j0 = ch * 16, j1 = Math.min(nyf, j0 + 16);
+            double[] t = new double[nxc];
             for (int j = j0; j < j1; j++) {
-                int J0 = j >> 1, J1 = (j & 1) == 0 ? J0 : J0 + 1;
-                double wy = (j & 1) == 0 ? 1.0 : 0.5;
-                for (int i = 0; i < nxf; i++) {
-                    int kf = j * nxf + i;
-                    if (!fine.active[kf]) continue;
-                    int I0 = i >> 1, I1 = (i & 1) == 0 ? I0 : I0 + 1;
-                    double wx = (i & 1) == 0 ? 1.0 : 0.5;
-                    double s = 0;
-                    for (int J = J0; J <= J1; J++) {
-                        for (int I = I0; I <= I1; I++) {
-                            int kc = J * nxc + I;
-                            if (coarse.active[kc]) s += xc[kc];
-                        }
-                    }
-                    x[kf] += wx * wy * s;
+                int J0 = j >> 1;
+                if ((j & 1) == 0) {
+                    System.arraycopy(xc, J0 * nxc, t, 0, nxc);
+                } else {
+                    if (J0 + 1 >= nyc) continue;
+                    int a = J0 * nxc, b = a + nxc;
+                    for (int I = 0; I < nxc; I++) t[I] = 0.5 * (xc[a + I] + xc[b + I]);
                 }
+                int kf0 = j * nxf;
+                for (int i = 0; i + 1 < nxf; i += 2) {
+                    int I = i >> 1;
+                    if (fine.active[kf0 + i]) x[kf0 + i] += t[I];
+                    if (fine.active[kf0 + i + 1]) x[kf0 + i + 1] += 0.5 * (t[I] + t[I + 1]);
+                }
+                if ((nxf & 1) == 1 && fine.active[kf0 + nxf - 1]) x[kf0 + nxf - 1] += t[(nxf - 1) >> 1];
             }
         });
     }
@@ -188,6 +186,10 @@ public final class Multigrid {
         int w = 2 * R + 1;
         for (int s = 0; s < w * w; s++) c.a[s] = new double[nxc * nyc];
         int[] nonNull = java.util.stream.IntStream.range(0, f.a.length).filter(s -> f.a[s] != null).toArray();
+        int ns = nonNull.length;
+        int[] sdi = new int[ns], sdj = new int[ns];
+        double[][] fa = new double[ns][];
+        for (int q = 0; q < ns; q++) { sdi[q] = nonNull[q] % w - R; sdj[q] = nonNull[q] / w - R; fa[q] = f.a[nonNull[q]]; }
         par.forEach((nyc + 3) / 4, ch -> {
             int Ja = ch * 4, Jb = Math.min(nyc, Ja + 4);
             double[] acc = new double[w * w];
@@ -202,22 +204,33 @@ public final class Multigrid {
                             int kf = fy * nxf + fx;
                             if (!f.active[kf]) continue;
                             double wf = (fx == 2 * I ? 1.0 : 0.5) * wy;
-                            for (int s : nonNull) {
-                                double aval = f.a[s][kf];
+                            for (int q = 0; q < ns; q++) {
+                                double aval = fa[q][kf];
                                 if (aval == 0.0) continue;
-                                int di = s % w - R, dj = s / w - R;
-                                int gx = fx + di, gy = fy + dj;
-                                if (!f.active[gy * nxf + gx]) continue;
+                                int gx = fx + sdi[q], gy = fy + sdj[q];
                                 double wa = wf * aval;
-                                int GJ0 = gy >> 1, GJ1 = (gy & 1) == 0 ? GJ0 : GJ0 + 1;
-                                int GI0 = gx >> 1, GI1 = (gx & 1) == 0 ? GI0 : GI0 + 1;
-                                double wgy = (gy & 1) == 0 ? 1.0 : 0.5, wgx = (gx & 1) == 0 ? 1.0 : 0.5;
-                                for (int GJ = GJ0; GJ <= GJ1; GJ++) {
-                                    for (int GI = GI0; GI <= GI1; GI++) {
-                                        if (!act[GJ * nxc + GI]) continue;
-                                        int oi = GI - I, oj = GJ - J;
-                                        acc[(oj + R) * w + (oi + R)] += wa * wgx * wgy;
+                                int GI0 = gx >> 1, GJ0 = gy >> 1;
+                                // offsets of the parents relative to (I, J), shifted into the accumulator
+                                int bx = GI0 - I + R, by = GJ0 - J + R;
+                                if ((gx & 1) == 0) {
+                                    if ((gy & 1) == 0) {
+                                        if (act[GJ0 * nxc + GI0]) acc[by * w + bx] += wa;
+                                    } else {
+                                        double h = 0.5 * wa;
+                                        if (act[GJ0 * nxc + GI0]) acc[by * w + bx] += h;
+                                        if (act[(GJ0 + 1) * nxc + GI0]) acc[(by + 1) * w + bx] += h;
                                     }
+                                } else if ((gy & 1) == 0) {
+                                    double h = 0.5 * wa;
+                                    if (act[GJ0 * nxc + GI0]) acc[by * w + bx] += h;
+                                    if (act[GJ0 * nxc + GI0 + 1]) acc[by * w + bx + 1] += h;
+                                } else {
+                                    double h = 0.25 * wa;
+                                    int k0 = GJ0 * nxc + GI0;
+                                    if (act[k0]) acc[by * w + bx] += h;
+                                    if (act[k0 + 1]) acc[by * w + bx + 1] += h;
+                                    if (act[k0 + nxc]) acc[(by + 1) * w + bx] += h;
+                                    if (act[k0 + nxc + 1]) acc[(by + 1) * w + bx + 1] += h;
                                 }
                             }
                         }

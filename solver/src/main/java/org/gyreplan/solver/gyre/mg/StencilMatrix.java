@@ -92,14 +92,16 @@ public final class StencilMatrix {
     public void apply(double[] x, double[] y, Parallel par) {
         par.forEach(chunks(), c -> {
             int j0 = c * ROWS_PER_CHUNK, j1 = Math.min(ny, j0 + ROWS_PER_CHUNK);
-            int k0 = j0 * nx, k1 = j1 * nx;
-            java.util.Arrays.fill(y, k0, k1, 0.0);
-            for (int s = 0; s < a.length; s++) {
-                double[] cs = a[s];
-                if (cs == null) continue;
-                int off = offset[s];
-                int lo = Math.max(k0, -off), hi = Math.min(k1, nx * ny - off);
-                for (int k = lo; k < hi; k++) y[k] += cs[k] * x[k + off];
+            for (int j = j0; j < j1; j++) {
+                int k0 = j * nx, k1 = k0 + nx;
+                java.util.Arrays.fill(y, k0, k1, 0.0);
+                if (j < radius || j >= ny - radius) continue;
+                for (int s = 0; s < a.length; s++) {
+                    double[] cs = a[s];
+                    if (cs == null) continue;
+                    int off = offset[s];
+                    for (int k = k0 + radius; k < k1 - radius; k++) y[k] += cs[k] * x[k + off];
+                }
             }
         });
     }
@@ -108,14 +110,16 @@ public final class StencilMatrix {
     public void residual(double[] b, double[] x, double[] r, Parallel par) {
         par.forEach(chunks(), c -> {
             int j0 = c * ROWS_PER_CHUNK, j1 = Math.min(ny, j0 + ROWS_PER_CHUNK);
-            int k0 = j0 * nx, k1 = j1 * nx;
-            for (int k = k0; k < k1; k++) r[k] = active[k] ? b[k] : 0.0;
-            for (int s = 0; s < a.length; s++) {
-                double[] cs = a[s];
-                if (cs == null) continue;
-                int off = offset[s];
-                int lo = Math.max(k0, -off), hi = Math.min(k1, nx * ny - off);
-                for (int k = lo; k < hi; k++) r[k] -= cs[k] * x[k + off];
+            for (int j = j0; j < j1; j++) {
+                int k0 = j * nx, k1 = k0 + nx;
+                for (int k = k0; k < k1; k++) r[k] = active[k] ? b[k] : 0.0;
+                if (j < radius || j >= ny - radius) continue;
+                for (int s = 0; s < a.length; s++) {
+                    double[] cs = a[s];
+                    if (cs == null) continue;
+                    int off = offset[s];
+                    for (int k = k0 + radius; k < k1 - radius; k++) r[k] -= cs[k] * x[k + off];
+                }
             }
         });
     }

@@ -25,12 +25,31 @@ import java.util.Objects;
 public final class CandidateLattice {
     private CandidateLattice() { }
 
+    /** One candidate per ocean cell centre (every {@code stride}-th cell in each direction). */
     public static List<MooringCandidate> fromGrid(UpwellingStatistics stats, List<UpwellingZone> zones, ScalarField depthM,
                                                   double portLonDeg, double portLatDeg, int stride,
                                                   ProgressListener progress, CancelToken cancel) {
+        return build(stats, zones, depthM, portLonDeg, portLatDeg, stride, 1, progress, cancel);
+    }
+
+    /**
+     * A finer lattice: each ocean cell holds {@code subdivisions}² candidates at the centres of its sub-cells. Upwelling
+     * criteria and zone membership come from the containing cell; depth is interpolated at each sub-cell point, so the
+     * depth window can pick the right part of a steep slope.
+     */
+    public static List<MooringCandidate> refined(UpwellingStatistics stats, List<UpwellingZone> zones, ScalarField depthM,
+                                                 double portLonDeg, double portLatDeg, int subdivisions,
+                                                 ProgressListener progress, CancelToken cancel) {
+        return build(stats, zones, depthM, portLonDeg, portLatDeg, 1, subdivisions, progress, cancel);
+    }
+
+    private static List<MooringCandidate> build(UpwellingStatistics stats, List<UpwellingZone> zones, ScalarField depthM,
+                                                double portLonDeg, double portLatDeg, int stride, int sub,
+                                                ProgressListener progress, CancelToken cancel) {
         Objects.requireNonNull(stats, "stats");
         Objects.requireNonNull(depthM, "depthM");
         if (stride < 1) throw new IllegalArgumentException("candidate stride must be ≥ 1, got " + stride);
+        if (sub < 1) throw new IllegalArgumentException("candidate subdivisions must be ≥ 1, got " + sub);
         LonLatGrid g = stats.grid();
         int nx = g.nx(), ny = g.ny();
         int[] zoneOf = new int[g.size()];
@@ -51,12 +70,18 @@ public final class CandidateLattice {
             for (int i = 0; i < nx; i += stride) {
                 int k = g.index(i, j);
                 if (!g.isOcean(k) || stats.count(k) == 0) continue;
-                double lon = g.lonDeg(i), lat = g.latDeg(j);
-                double coastKm = Double.POSITIVE_INFINITY;
-                for (double[] c : coast) coastKm = Math.min(coastKm, Geodesy.sphereDistanceM(lon, lat, c[0], c[1]) / 1000.0);
-                double portKm = Geodesy.distanceM(portLonDeg, portLatDeg, lon, lat) / 1000.0;
-                out.add(new MooringCandidate("c-" + i + "-" + j, lon, lat, depthM.interpolate(lon, lat), coastKm, portKm,
-                        stats.persistence(k), stats.mean(k), stats.std(k), zoneOf[k]));
+                for (int b = 0; b < sub; b++) {
+                    for (int a = 0; a < sub; a++) {
+                        double lon = sub == 1 ? g.lonDeg(i) : g.lonDeg(i) + ((a + 0.5) / sub - 0.5) * g.dLonDeg();
+                        double lat = sub == 1 ? g.latDeg(j) : g.latDeg(j) + ((b + 0.5) / sub - 0.5) * g.dLatDeg();
+                        double coastKm = Double.POSITIVE_INFINITY;
+                        for (double[] c : coast) coastKm = Math.min(coastKm, Geodesy.sphereDistanceM(lon, lat, c[0], c[1]) / 1000.0);
+                        double portKm = Geodesy.distanceM(portLonDeg, portLatDeg, lon, lat) / 1000.0;
+                        String id = sub == 1 ? "c-" + i + "-" + j : "c-" + i + "-" + j + "-" + a + b;
+                        out.add(new MooringCandidate(id, lon, lat, depthM.interpolate(lon, lat), coastKm, portKm,
+                                stats.persistence(k), stats.mean(k), stats.std(k), zoneOf[k]));
+                    }
+                }
             }
         }
         progress.progress("mooring candidates", 1.0, out.size() + " candidates");

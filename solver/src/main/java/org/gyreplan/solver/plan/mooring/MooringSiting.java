@@ -28,7 +28,7 @@ import java.util.Objects;
  *   maximise (|S|, Σ_{c∈S} score(c)) lexicographically, |S| ≤ K, geodesic distance ≥ minSpacing for all pairs in S
  * </pre>
  * The set selection is {@link SiteSelection}: greedy by score, then add / 1-for-1 swap / 1-for-2 exchange local
- * search, then an exact branch-and-bound seeded with that set and bounded by a node budget (proven optimal when it
+ * search, then an exact branch-and-bound seeded with that set and bounded by a deterministic work budget (proven optimal when it
  * finishes, which is the usual case for up to a few hundred feasible candidates and small K; otherwise the
  * local-search set, possibly improved, is returned and flagged). The result is never worse than greedy.
  * Spacing conflicts use the WGS 84 geodesic distance (GeographicLib) after a spherical pre-filter.
@@ -43,7 +43,7 @@ public final class MooringSiting {
         return choose(candidates, constraints, weights, k, SiteSelection.DEFAULT_NODE_BUDGET);
     }
 
-    /** Best K sites; {@code nodeBudget} bounds the exact search. */
+    /** Best K sites; {@code nodeBudget} bounds the work of the exact search (nodes plus candidates scanned). */
     public static SitingResult choose(List<MooringCandidate> candidates, SiteConstraints constraints, SiteWeights weights,
                                       int k, long nodeBudget) {
         Objects.requireNonNull(candidates, "candidates");

@@ -12,13 +12,15 @@ import java.util.List;
  *
  * <ol>
  *   <li><b>Greedy</b>: take candidates by decreasing score, skipping any that conflicts with those taken.</li>
- *   <li><b>Local search</b> from the greedy set, best improvement until no move helps: add a compatible candidate
- *       (while fewer than K); 1-for-1 swap raising the total score; 1-for-2 exchange raising the count. Never
- *       worse than greedy, because it starts there and only accepts improvements.</li>
+ *   <li><b>Local search</b> from the greedy set until no move helps, trying in turn: add a compatible candidate
+ *       (while fewer than K); 1-for-2 exchange raising the count; shift (remove one site, insert one of the 300 best
+ *       free candidates — or none — and refill greedily; best over all such moves); two-site shift (remove two,
+ *       insert one of the 40 best free candidates, refill greedily); 1-for-1 swap raising the total score. Never worse than greedy, because it starts
+ *       there and only accepts improvements.</li>
  *   <li><b>Exact branch-and-bound</b> (depth first, candidates by decreasing score, include-before-exclude),
- *       seeded with the local-search set as incumbent. Bound: current count + min(K − c, remaining) and current
- *       sum + the (K − c) largest remaining scores (a relaxation dropping the conflicts). It stops after a node
- *       budget; if it finishes, the set is proven optimal, otherwise the best set found (never worse than local
+ *       seeded with the local-search set as incumbent. Bound: the current set plus the (K − c) best remaining
+ *       candidates not in conflict with it (a relaxation that ignores conflicts among those). It stops after a work
+ *       budget (nodes plus candidates scanned by the bound, so the result is deterministic); if it finishes, the set is proven optimal, otherwise the best set found (never worse than local
  *       search) is returned and flagged not proven.</li>
  * </ol>
  * The 1-for-2 exchange considers pairs among the 300 best-scoring candidates that would be free after the removal,
@@ -26,11 +28,13 @@ import java.util.List;
  * Scores must be finite and ≥ 0. Ties are broken by index, so results are deterministic.
  */
 public final class SiteSelection {
-    /** Default node budget of the branch-and-bound. */
-    public static final long DEFAULT_NODE_BUDGET = 2_000_000L;
+    /** Default work budget of the branch-and-bound (search nodes plus candidates scanned by the bound; deterministic). */
+    public static final long DEFAULT_NODE_BUDGET = 5_000_000L;
     private static final double EPS = 1e-12;
     /** The 1-for-2 exchange looks for pairs among this many best-scoring free candidates (bounds the O(n²) pair scan). */
     static final int PAIR_POOL = 300;
+    /** The two-site shift tries this many best-scoring free candidates as the new site. */
+    static final int SHIFT_POOL = 40;
 
     /** A chosen set with its objective and whether it was proven optimal. */
     public record Selection(int[] chosen, double total, boolean provenOptimal, String method) {
@@ -101,7 +105,58 @@ public final class SiteSelection {
                     continue;
                 }
             }
-            // 3) 1-for-1 swap (raises the score)
+            // 3) shift: remove one site, put in one of the best free candidates (or none), refill greedily
+            {
+                double curTotal = 0;
+                for (int i : s) curTotal += score[i];
+                List<Integer> bestSet = null;
+                double bestT = curTotal;
+                int bestC = s.size();
+                for (int out : s) {
+                    BitSet base = new BitSet();
+                    for (int i : s) if (i != out) { base.or(conflicts[i]); base.set(i); }
+                    base.set(out);
+                    List<Integer> entries = new ArrayList<>();
+                    entries.add(-1);
+                    for (int j : sortedOrder) {
+                        if (entries.size() > PAIR_POOL) break;
+                        if (!base.get(j)) entries.add(j);
+                    }
+                    for (int in0 : entries) {
+                        List<Integer> t = new ArrayList<>(s);
+                        t.remove(Integer.valueOf(out));
+                        BitSet blocked = (BitSet) base.clone();
+                        if (in0 >= 0) { t.add(in0); blocked.or(conflicts[in0]); blocked.set(in0); }
+                        for (int j : sortedOrder) {
+                            if (t.size() >= k) break;
+                            if (blocked.get(j)) continue;
+                            t.add(j);
+                            blocked.or(conflicts[j]);
+                            blocked.set(j);
+                        }
+                        double tt = 0;
+                        for (int i : t) tt += score[i];
+                        if (t.size() > bestC || (t.size() == bestC && tt > bestT + EPS)) { bestC = t.size(); bestT = tt; bestSet = t; }
+                    }
+                }
+                if (bestSet != null) {
+                    s.clear();
+                    s.addAll(bestSet);
+                    improved = true;
+                    continue;
+                }
+            }
+            // 4) shift two: remove two sites, insert one of the best free candidates, refill greedily
+            if (s.size() >= 2) {
+                List<Integer> better = shiftTwo(s);
+                if (better != null) {
+                    s.clear();
+                    s.addAll(better);
+                    improved = true;
+                    continue;
+                }
+            }
+            // 5) 1-for-1 swap (raises the score)
             double bestGain = EPS;
             int out = -1, inn = -1;
             for (int i : s) {
@@ -119,7 +174,49 @@ public final class SiteSelection {
                 improved = true;
             }
         }
-        return of(s, false, "greedy + add/swap/1-for-2 local search");
+        return of(s, false, "greedy + add/1-for-2/shift-refill/two-site shift/swap local search");
+    }
+
+    /** Best improving "remove two, insert one of the best free, refill greedily" move, or null. */
+    private List<Integer> shiftTwo(List<Integer> s) {
+        double curTotal = 0;
+        for (int i : s) curTotal += score[i];
+        List<Integer> bestSet = null;
+        double bestT = curTotal;
+        int bestC = s.size();
+        for (int a = 0; a < s.size(); a++) {
+            for (int b = a + 1; b < s.size(); b++) {
+                int oa = s.get(a), ob = s.get(b);
+                BitSet base = new BitSet();
+                for (int i : s) if (i != oa && i != ob) { base.or(conflicts[i]); base.set(i); }
+                base.set(oa);
+                base.set(ob);
+                int tried = 0;
+                for (int in0 : sortedOrder) {
+                    if (tried >= SHIFT_POOL) break;
+                    if (base.get(in0)) continue;
+                    tried++;
+                    List<Integer> t = new ArrayList<>(s);
+                    t.remove(Integer.valueOf(oa));
+                    t.remove(Integer.valueOf(ob));
+                    t.add(in0);
+                    BitSet blocked = (BitSet) base.clone();
+                    blocked.or(conflicts[in0]);
+                    blocked.set(in0);
+                    for (int j : sortedOrder) {
+                        if (t.size() >= k) break;
+                        if (blocked.get(j)) continue;
+                        t.add(j);
+                        blocked.or(conflicts[j]);
+                        blocked.set(j);
+                    }
+                    double tt = 0;
+                    for (int i : t) tt += score[i];
+                    if (t.size() > bestC || (t.size() == bestC && tt > bestT + EPS)) { bestC = t.size(); bestT = tt; bestSet = t; }
+                }
+            }
+        }
+        return bestSet;
     }
 
     private int[] bestOneForTwo(List<Integer> s, boolean[] in, int[] hits) {
@@ -146,10 +243,10 @@ public final class SiteSelection {
         return best;
     }
 
-    /** Branch-and-bound with the default node budget. */
+    /** Branch-and-bound with the default work budget. */
     public Selection best() { return best(DEFAULT_NODE_BUDGET); }
 
-    /** Branch-and-bound seeded with local search; exact when it finishes within {@code nodeBudget} nodes. */
+    /** Branch-and-bound seeded with local search; exact when it finishes within {@code nodeBudget} work units (nodes plus candidates scanned). */
     public Selection best(long nodeBudget) {
         Selection seed = localSearch();
         Integer[] ord = order();
@@ -167,19 +264,20 @@ public final class SiteSelection {
         for (int i : b.bestSet) chosen.add(i);
         boolean proven = !b.exhausted;
         return of(chosen, proven, proven ? "exact branch-and-bound (seeded by greedy + local search)"
-                : "greedy + local search, improved by a truncated branch-and-bound (node budget " + nodeBudget + " reached)");
+                : "greedy + local search, improved by a truncated branch-and-bound (work budget " + nodeBudget + " reached)");
     }
 
     private final class Bnb {
         final Integer[] ord;
         final double[] sorted;
-        final double[] prefix;
         final long budget;
         long nodes;
         boolean exhausted;
         int bestCount;
         double bestSum;
         int[] bestSet;
+
+        final double[] prefix;
 
         Bnb(Integer[] ord, double[] sorted, double[] prefix, long budget) {
             this.ord = ord; this.sorted = sorted; this.prefix = prefix; this.budget = budget;
@@ -197,9 +295,20 @@ public final class SiteSelection {
             }
             int n = ord.length;
             if (c == k || pos == n) return;
+            // cheap bound first: the (K − c) best remaining scores, blocked or not
             int room = Math.min(k - c, n - pos);
-            int countBound = c + room;
-            double sumBound = sum + prefix[pos + room] - prefix[pos];
+            double loose = sum + prefix[pos + room] - prefix[pos];
+            if (c + room < bestCount || (c + room == bestCount && loose <= bestSum + EPS)) return;
+            // tighter bound: the (K − c) best remaining candidates not blocked by the chosen ones (conflicts among
+            // them ignored); the scan counts against the work budget
+            int found = 0;
+            double sumBound = sum;
+            int scan = pos;
+            for (; scan < n && found < k - c; scan++) {
+                if (blockedBy[scan] == 0) { sumBound += sorted[scan]; found++; }
+            }
+            nodes += scan - pos;
+            int countBound = c + found;
             if (countBound < bestCount || (countBound == bestCount && sumBound <= bestSum + EPS)) return;
             int i = ord[pos];
             if (blockedBy[pos] == 0) {

@@ -19,13 +19,16 @@ import java.util.Objects;
  *   transit      t_tr = s / V                                   (s leg distance, V ship speed; 1 kn = 1852/3600 m s⁻¹)
  *   CTD station  t_w  = z_c / r_down + z_c / r_up + t_oh,      z_c = min(depth − clearance, max cast)
  *   mooring      t_w  = deployment or service hours
- *   weather      t_st = t_w / (1 − p),   p = min(downtime fraction of the arrival month, p_max)
+ *   weather      t_st = t_w / (1 − p) + p·τ_b,   p = min(downtime fraction of the arrival month, p_max)
  *   daylight     mooring work waits for sunrise if it would start before sunrise or end after sunset
  * </pre>
  * Weather model: deck work proceeds only while the wind is below the operations limit, which it is a fraction
- * (1 − p) of the time (climatology of the arrival month, UTC); the expected elapsed time for t_w of work is then
- * t_w/(1 − p). This mean-value model treats good and bad weather as finely mixed; real storms come in blocks of
- * days, so the spread of the total is much larger than its mean suggests — add contingency (commonly 10–20 %).
+ * (1 − p) of the time (climatology of the arrival month, UTC). If good and bad weather alternate as a two-state
+ * Markov process with mean bad-spell length τ_b (stationary at arrival), the expected elapsed time to get t_w of
+ * workable time is exactly t_w/(1 − p) + p·τ_b: the first term counts the bad spells entered while working, the
+ * second the chance of arriving in a bad spell times its mean (remaining) length. τ_b = 0 gives finely mixed weather.
+ * This is a mean: real storms come in blocks of days and the spread of the total is much larger than the mean
+ * suggests — add contingency (commonly 10–20 %).
  * Transit is not slowed by weather here. Sunrise/sunset from {@link SolarDay} (NOAA formulas after Meeus 1991).
  * Common-practice figures: CHECKS.md PL-01…PL-06.
  *
@@ -81,7 +84,7 @@ public record CruiseSchedule(Instant departure, List<LegRow> rows, ScheduleParam
                     pDown = p.maxDowntimeFraction();
                 }
             }
-            double stationH = workH / (1 - pDown);
+            double stationH = workH > 0 ? workH / (1 - pDown) + pDown * p.meanBadSpellHours() : 0.0;
             double waitH = 0;
             if (mooring && p.daylightForMooring() && stationH > 0) {
                 waitH = daylightWait(arrival, stationH, to, cautions);
@@ -98,7 +101,7 @@ public record CruiseSchedule(Instant departure, List<LegRow> rows, ScheduleParam
             now = leave;
         }
         double totalH = Duration.between(departure, now).toMillis() / 3.6e6;
-        cautions.add("Weather downtime is a mean-value estimate (work/(1 − p)); storms come in blocks: add contingency.");
+        cautions.add("Weather downtime is a mean-value estimate (work/(1 − p) + p·bad-spell length); storms come in blocks: add contingency.");
         return new CruiseSchedule(departure, rows, p, dist, tr, st, wx, wait, totalH / 24.0, now, cautions);
     }
 

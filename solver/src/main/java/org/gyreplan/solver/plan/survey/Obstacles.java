@@ -34,8 +34,9 @@ import java.util.Map;
  *       quarter of the buffer, and vertices inside any original polygon dropped). Edges are geodesics that
  *       pass the same crossing test against the original polygons; weights are their WGS 84 lengths. The search is
  *       Dijkstra on the dense graph; vertex–vertex visibility is computed once per
- *       {@code Obstacles} and point–vertex visibility once per point, so routing many stops costs
- *       O(V² + P·V) crossing tests (V vertices, P places). Simplify large coastlines before use.</li>
+ *       {@code Obstacles} and point–vertex visibility once per point, so routing many stops costs at most
+ *       O(V² + P·V) crossing tests (V vertices, P places); vertex rows are computed only when the search reaches the
+ *       vertex, so distant parts of a long coastline cost little. Simplify large coastlines before use.</li>
  *   <li>The result is the shortest path through buffered vertices, not the exact shortest path around curved
  *       coastlines: it is longer by the corner cut-offs, and it keeps at least roughly the margin at the turning
  *       points only.</li>
@@ -93,6 +94,29 @@ public final class Obstacles {
         return new Obstacles(u == null || u.isEmpty() ? null : u, marginKm, checkStepKm);
     }
 
+    /**
+     * Obstacles clipped to the region of the cruise: the envelope of the places widened by {@code padDeg} on every
+     * side. Use it with large land layers (e.g. a world coastline) to keep the visibility graph small. Routes cannot
+     * leave the padded box around a clipped polygon, so choose a pad wider than any detour (e.g. 2–5°).
+     */
+    public static Obstacles around(List<Geometry> polygons, List<Stop> places, double padDeg, double marginKm, double checkStepKm) {
+        if (places == null || places.isEmpty()) throw new IllegalArgumentException("obstacles around a cruise need at least one place");
+        if (!(padDeg > 0)) throw new IllegalArgumentException("padDeg must be > 0, got " + padDeg);
+        org.locationtech.jts.geom.Envelope env = new org.locationtech.jts.geom.Envelope();
+        for (Stop p : places) env.expandToInclude(p.lonDeg(), p.latDeg());
+        env.expandBy(padDeg);
+        Geometry box = GF.toGeometry(env);
+        List<Geometry> clipped = new ArrayList<>();
+        if (polygons != null) {
+            for (Geometry g : polygons) {
+                if (!g.getEnvelopeInternal().intersects(env)) continue;
+                Geometry c = g.intersection(box);
+                if (!c.isEmpty()) clipped.add(c);
+            }
+        }
+        return of(clipped, marginKm, checkStepKm);
+    }
+
     /** The union of the obstacles, or null. */
     public Geometry union() { return union; }
 
@@ -127,7 +151,6 @@ public final class Obstacles {
         if (contains(lon2, lat2)) throw new IllegalArgumentException("position (" + lon2 + ", " + lat2 + ") is on land or inside an exclusion zone");
         if (clear(lon1, lat1, lon2, lat2)) return List.of(new double[] {lon1, lat1}, new double[] {lon2, lat2});
         int v = nodes.length, start = v, goal = v + 1;
-        double[][] nd = nodeDistances();
         double[] fromStart = endpointDistances(lon1, lat1), toGoal = endpointDistances(lon2, lat2);
         // Dijkstra on the dense graph (V + 2 nodes); start has edges fromStart, goal has edges toGoal
         double[] g = new double[v + 2];
@@ -142,9 +165,10 @@ public final class Obstacles {
             if (u < 0 || g[u] == Double.POSITIVE_INFINITY) break;
             done[u] = true;
             if (u == goal) break;
+            double[] rowU = u == start ? null : row(u);
             for (int w = 0; w < v; w++) {
                 if (done[w]) continue;
-                double e = u == start ? fromStart[w] : nd[u][w];
+                double e = u == start ? fromStart[w] : rowU[w];
                 if (g[u] + e < g[w]) { g[w] = g[u] + e; prev[w] = u; }
             }
             if (u != start && g[u] + toGoal[u] < g[goal]) { g[goal] = g[u] + toGoal[u]; prev[goal] = u; }
@@ -159,21 +183,26 @@ public final class Obstacles {
         return out;
     }
 
-    /** Geodesic lengths between mutually visible vertices (∞ if blocked), computed once. */
+    /** The vertex–vertex distance matrix, rows filled lazily by {@link #row} (NaN = not yet computed). */
     private synchronized double[][] nodeDistances() {
         if (nodeDist == null) {
             int v = nodes.length;
-            double[][] d = new double[v][v];
-            for (int i = 0; i < v; i++) {
-                for (int j = i + 1; j < v; j++) {
-                    double e = clear(nodes[i][0], nodes[i][1], nodes[j][0], nodes[j][1])
-                            ? Geodesy.distanceM(nodes[i][0], nodes[i][1], nodes[j][0], nodes[j][1]) : Double.POSITIVE_INFINITY;
-                    d[i][j] = d[j][i] = e;
-                }
-            }
-            nodeDist = d;
+            nodeDist = new double[v][v];
+            for (double[] r : nodeDist) java.util.Arrays.fill(r, Double.NaN);
         }
         return nodeDist;
+    }
+
+    /** Row u of the vertex–vertex geodesic lengths (∞ where blocked), computed on first use and cached (symmetric). */
+    private synchronized double[] row(int u) {
+        double[][] d = nodeDistances();
+        for (int w = 0; w < nodes.length; w++) {
+            if (!Double.isNaN(d[u][w])) continue;
+            double e = w == u ? 0.0 : clear(nodes[u][0], nodes[u][1], nodes[w][0], nodes[w][1])
+                    ? Geodesy.distanceM(nodes[u][0], nodes[u][1], nodes[w][0], nodes[w][1]) : Double.POSITIVE_INFINITY;
+            d[u][w] = d[w][u] = e;
+        }
+        return d[u];
     }
 
     /** Geodesic lengths from a point to every visible vertex (∞ if blocked), cached per point. */

@@ -19,11 +19,14 @@ import org.gyreplan.solver.plan.mooring.DeploymentWindows;
  * @param stationWeather         calm fractions for the CTD operations limit (null = no weather downtime)
  * @param mooringWeather         calm fractions for the mooring operations limit (null = use {@code stationWeather})
  * @param maxDowntimeFraction    cap on the downtime fraction p in 1/(1 − p), 0…0.95 (avoids unbounded waits)
+ * @param meanBadSpellHours      mean duration of a spell of weather above the limit, h (≥ 0; 0 = good and bad weather
+ *                               finely mixed). Adds p·τ to each operation: the chance of arriving in a bad spell
+ *                               times its mean length (see {@link CruiseSchedule})
  */
 public record ScheduleParameters(double shipSpeedKn, double ctdDescentMpm, double ctdAscentMpm, double stationOverheadMin,
                                  double bottomClearanceM, double maxCastDepthM, double mooringDeploymentHours,
                                  double mooringServiceHours, boolean daylightForMooring, DeploymentWindows stationWeather,
-                                 DeploymentWindows mooringWeather, double maxDowntimeFraction) {
+                                 DeploymentWindows mooringWeather, double maxDowntimeFraction, double meanBadSpellHours) {
     public ScheduleParameters {
         if (!(shipSpeedKn > 0)) throw new IllegalArgumentException("ship speed must be > 0 kn, got " + shipSpeedKn);
         if (!(ctdDescentMpm > 0) || !(ctdAscentMpm > 0)) throw new IllegalArgumentException("CTD winch rates must be > 0 m/min");
@@ -32,25 +35,32 @@ public record ScheduleParameters(double shipSpeedKn, double ctdDescentMpm, doubl
         if (!(maxCastDepthM > 0)) throw new IllegalArgumentException("maximum cast depth must be > 0 m");
         if (!(mooringDeploymentHours >= 0) || !(mooringServiceHours >= 0)) throw new IllegalArgumentException("mooring work times must be ≥ 0 h");
         if (!(maxDowntimeFraction >= 0 && maxDowntimeFraction <= 0.95)) throw new IllegalArgumentException("maxDowntimeFraction must be in [0, 0.95]");
+        if (!(meanBadSpellHours >= 0) || !Double.isFinite(meanBadSpellHours)) throw new IllegalArgumentException("meanBadSpellHours must be finite and ≥ 0 h, got " + meanBadSpellHours);
     }
 
-    /** 10 kn, 60 m/min down and up, 20 min overhead, 10 m above the bottom, 6000 m wire, 8 h deploy, 12 h service, daylight for moorings, no weather. */
+    /** 10 kn, 60 m/min down and up, 20 min overhead, 10 m above the bottom, 6000 m wire, 8 h deploy, 12 h service, daylight for moorings, no weather, finely mixed weather. */
     public static ScheduleParameters commonPractice() {
-        return new ScheduleParameters(10, 60, 60, 20, 10, 6000, 8, 12, true, null, null, 0.9);
+        return new ScheduleParameters(10, 60, 60, 20, 10, 6000, 8, 12, true, null, null, 0.9, 0);
     }
 
     public ScheduleParameters withSpeedKn(double kn) {
         return new ScheduleParameters(kn, ctdDescentMpm, ctdAscentMpm, stationOverheadMin, bottomClearanceM, maxCastDepthM,
-                mooringDeploymentHours, mooringServiceHours, daylightForMooring, stationWeather, mooringWeather, maxDowntimeFraction);
+                mooringDeploymentHours, mooringServiceHours, daylightForMooring, stationWeather, mooringWeather, maxDowntimeFraction, meanBadSpellHours);
     }
 
     public ScheduleParameters withWeather(DeploymentWindows station, DeploymentWindows mooring) {
         return new ScheduleParameters(shipSpeedKn, ctdDescentMpm, ctdAscentMpm, stationOverheadMin, bottomClearanceM, maxCastDepthM,
-                mooringDeploymentHours, mooringServiceHours, daylightForMooring, station, mooring, maxDowntimeFraction);
+                mooringDeploymentHours, mooringServiceHours, daylightForMooring, station, mooring, maxDowntimeFraction, meanBadSpellHours);
+    }
+
+    /** The same with a mean bad-weather spell length, h (0 = finely mixed weather). */
+    public ScheduleParameters withBadSpellHours(double hours) {
+        return new ScheduleParameters(shipSpeedKn, ctdDescentMpm, ctdAscentMpm, stationOverheadMin, bottomClearanceM, maxCastDepthM,
+                mooringDeploymentHours, mooringServiceHours, daylightForMooring, stationWeather, mooringWeather, maxDowntimeFraction, hours);
     }
 
     public ScheduleParameters withDaylightForMooring(boolean required) {
         return new ScheduleParameters(shipSpeedKn, ctdDescentMpm, ctdAscentMpm, stationOverheadMin, bottomClearanceM, maxCastDepthM,
-                mooringDeploymentHours, mooringServiceHours, required, stationWeather, mooringWeather, maxDowntimeFraction);
+                mooringDeploymentHours, mooringServiceHours, required, stationWeather, mooringWeather, maxDowntimeFraction, meanBadSpellHours);
     }
 }

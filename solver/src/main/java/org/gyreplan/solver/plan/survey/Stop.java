@@ -18,7 +18,10 @@ public record Stop(String id, double lonDeg, double latDeg, double depthM, StopK
         if (kind == null) throw new IllegalArgumentException("stop '" + id + "' needs a kind");
     }
 
-    /** A port. */
+    /**
+     * A port. Give the position of the harbour entrance or pilot station, just offshore: a position on or inside a
+     * land polygon is rejected by the router.
+     */
     public static Stop port(String name, double lonDeg, double latDeg) {
         return new Stop(name, lonDeg, latDeg, Double.NaN, StopKind.PORT);
     }

@@ -44,6 +44,7 @@ public final class SurveyRoute {
         Objects.requireNonNull(stops, "stops");
         Objects.requireNonNull(obstacles, "obstacles");
         checkIds(port, stops, obstacles);
+        if (stops.isEmpty()) return new Route(port, List.of(), List.of(), "no stops", cautions(List.of()));
         List<Stop> places = new ArrayList<>();
         places.add(port);
         places.addAll(stops);
@@ -76,6 +77,7 @@ public final class SurveyRoute {
     /** A route visiting the stops in the given order (no reordering), around the obstacles. */
     public static Route inOrder(Stop port, List<Stop> stops, Obstacles obstacles) {
         checkIds(port, stops, obstacles);
+        if (stops.isEmpty()) return new Route(port, List.of(), List.of(), "no stops", cautions(List.of()));
         List<Stop> seq = new ArrayList<>();
         seq.add(port);
         seq.addAll(stops);
@@ -92,6 +94,10 @@ public final class SurveyRoute {
     private static void checkIds(Stop port, List<Stop> stops, Obstacles obstacles) {
         Set<String> ids = new HashSet<>();
         ids.add(port.id());
+        if (obstacles.contains(port.lonDeg(), port.latDeg())) {
+            throw new IllegalArgumentException("port '" + port.id() + "' at (" + port.lonDeg() + ", " + port.latDeg()
+                    + ") lies on land or inside an exclusion zone; give the harbour entrance just offshore");
+        }
         for (Stop s : stops) {
             if (!ids.add(s.id())) throw new IllegalArgumentException("duplicate stop id '" + s.id() + "'");
             if (obstacles.contains(s.lonDeg(), s.latDeg())) {

@@ -82,8 +82,8 @@ public final class Transects {
             double bearing = Math.toDegrees(Math.atan2(ex, ny));
             if (bearing < 0) bearing += 360;
             if (pz != null) {
-                double[][] line = Geodesy.densify(lon, lat, Geodesy.direct(lon, lat, bearing, design.lengthKm() * 1000)[0],
-                        Geodesy.direct(lon, lat, bearing, design.lengthKm() * 1000)[1], 2000);
+                double[] end = Geodesy.direct(lon, lat, bearing, design.lengthKm() * 1000);
+                double[][] line = Geodesy.densify(lon, lat, end[0], end[1], 2000);
                 Coordinate[] cs = new Coordinate[line.length];
                 for (int q = 0; q < line.length; q++) cs[q] = new Coordinate(line[q][0], line[q][1]);
                 if (!pz.intersects(GF.createLineString(cs))) continue;

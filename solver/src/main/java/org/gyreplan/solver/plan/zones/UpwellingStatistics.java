@@ -22,7 +22,9 @@ import java.util.Objects;
  * squares and products", Technometrics 4, 419–420), which avoids the cancellation of the naive Σw² − n w̄².
  * w₀ is the "upwelling" cut (default 0: any upward velocity counts). Non-finite values (land, equatorial
  * cut-off, missing) are skipped per cell, so n may differ between cells. Results are bit-identical for the same
- * input order.
+ * input order. The raw-array entry points ({@link #add(Instant, double[])}, {@link #addCellSeries}) accept any rate
+ * (e.g. a coastal upwelling index in m³ s⁻¹ per 100 m) as long as the cut and the zone thresholds use the same unit;
+ * the {@code ScalarField} entry point insists on m s⁻¹.
  */
 public final class UpwellingStatistics {
     private final LonLatGrid grid;
@@ -64,7 +66,7 @@ public final class UpwellingStatistics {
                     + field.grid() + " vs " + grid + ")");
         }
         String u = field.units().trim();
-        if (!(u.equals("m s-1") || u.equals("m/s") || u.equals("m s^-1"))) {
+        if (!java.util.Set.of("m s-1", "m/s", "m s^-1", "m s**-1", "m.s-1").contains(u)) {
             throw new IllegalArgumentException("field '" + field.name() + "' has units '" + field.units()
                     + "', expected an upwelling rate in 'm s-1'");
         }

@@ -97,6 +97,14 @@ public final class UpwellingZones {
         return out;
     }
 
+    /** The union of the zones' polygons (lon/lat), or an empty polygon if there are none. */
+    public static Geometry union(List<UpwellingZone> zones) {
+        List<Geometry> g = new ArrayList<>();
+        for (UpwellingZone z : zones) g.add(z.polygon());
+        Geometry u = UnaryUnionOp.union(g);
+        return u == null ? GF.createPolygon() : u;
+    }
+
     private static UpwellingZone describe(UpwellingStatistics s, ZoneThresholds t, int[] cells) {
         LonLatGrid g = s.grid();
         int nx = g.nx();

@@ -93,4 +93,58 @@ class CruiseScheduleTest {
                 Instant.parse("2024-03-20T08:00:00Z"));
         assertEquals(0.0, n.rows().get(0).daylightWaitHours(), 0);
     }
+
+    /**
+     * The weather model t/(1 − p) is the mean elapsed time to accumulate t hours of workable weather when each short
+     * interval is unworkable with probability p independently (a sum of geometric waiting times; elementary
+     * probability). Checked by seeded Monte Carlo: t = 10 h, p = 0.3, 6-minute steps, 20 000 trials → 14.286 h
+     * within 4 standard errors. With persistent weather (a two-state Markov chain with the same p and 6-hour mean bad
+     * spells, stationary at the start) the mean becomes t/(1 − p) + p·τ_b = 14.286 + 1.8 = 16.086 h (derived: bad
+     * spells entered while working plus arriving in one), and the spread is much larger — the reason for the
+     * contingency caution. The schedule uses the same formula; checked on a one-station cruise.
+     */
+    @Test
+    void weatherDowntimeModelMatchesMonteCarlo() {
+        java.util.Random rnd = new java.util.Random(11);
+        double t = 10, p = 0.3, dt = 0.1;
+        int trials = 20_000;
+        double sum = 0, sum2 = 0;
+        for (int k = 0; k < trials; k++) {
+            double work = 0, elapsed = 0;
+            while (work < t - 1e-9) { elapsed += dt; if (rnd.nextDouble() >= p) work += dt; }
+            sum += elapsed;
+            sum2 += elapsed * elapsed;
+        }
+        double mean = sum / trials, sd = Math.sqrt(sum2 / trials - mean * mean);
+        double model = t / (1 - p);
+        assertEquals(model, mean, 4 * sd / Math.sqrt(trials) + 1e-9);
+        // persistent weather: P(bad→good) = dt/6h·…, stationary bad fraction p
+        double leaveBad = dt / 6.0, leaveGood = leaveBad * p / (1 - p);
+        double sumM = 0, sumM2 = 0;
+        for (int k = 0; k < trials; k++) {
+            boolean bad = rnd.nextDouble() < p;
+            double work = 0, elapsed = 0;
+            while (work < t - 1e-9) {
+                elapsed += dt;
+                if (!bad) work += dt;
+                bad = bad ? rnd.nextDouble() >= leaveBad : rnd.nextDouble() < leaveGood;
+            }
+            sumM += elapsed;
+            sumM2 += elapsed * elapsed;
+        }
+        double meanM = sumM / trials, sdM = Math.sqrt(sumM2 / trials - meanM * meanM);
+        double sdMean = sdM / Math.sqrt(trials);
+        assertEquals(model + p * 6.0, meanM, 4 * sdMean + 0.05, "persistent weather mean (0.05 h for the 6-min step)");
+        assertTrue(sdM > 3 * sd, "persistent weather spreads the elapsed time: sd " + sdM + " vs " + sd);
+        // the schedule: 10 h of mooring work, p ≈ 0.3, τ_b = 6 h → t/(1 − p) + p·τ_b on station
+        Stop port = Stop.port("P", -10, 30);
+        double[] pos = Geodesy.direct(-10, 30, 0, 10 * 1852.0);
+        Route r = SurveyRoute.inOrder(port, List.of(new Stop("M1", pos[0], pos[1], 3000, StopKind.MOORING_SERVICE)), Obstacles.none());
+        DeploymentWindows w = constantDowntime(0.3);
+        double pJul = w.downtimeFraction(7);   // 0.3 up to the month's sample count (124 six-hourly samples)
+        assertEquals(0.3, pJul, 0.01);
+        ScheduleParameters par = new ScheduleParameters(10, 60, 60, 20, 10, 6000, 8, 10, false, w, null, 0.9, 6.0);
+        CruiseSchedule c = CruiseSchedule.of(r, par, Instant.parse("2025-07-01T00:00:00Z"));
+        assertEquals(10 / (1 - pJul) + pJul * 6, c.rows().get(0).stationHours(), 1e-9);
+    }
 }

@@ -156,6 +156,30 @@ class SurveyRouteTest {
         assertTrue(detours > 0, "the test layout never forced a detour");
     }
 
+    /** Clipping a large land layer to the cruise region keeps the routes legal and gives the same route as unclipped. */
+    @Test
+    void clippedObstaclesGiveTheSameRoute() {
+        Geometry island = poly(-1.0, 29.6, -0.4, 29.8, -0.3, 30.4, -0.8, 30.5, -1.2, 30.1);
+        Geometry farAway = poly(40, 10, 41, 10, 41, 11, 40, 11);
+        Stop port = Stop.port("P", 0.2, 30.0);
+        List<Stop> stops = List.of(new Stop("A", -1.6, 30.2, 100, StopKind.CTD_STATION), new Stop("B", -1.5, 29.5, 100, StopKind.CTD_STATION));
+        List<Stop> places = new ArrayList<>(stops);
+        places.add(port);
+        Obstacles clipped = Obstacles.around(List.of(island, farAway), places, 2.0, 2.0, 1.0);
+        Obstacles full = Obstacles.of(List.of(island, farAway), 2.0, 1.0);
+        assertTrue(clipped.vertexCount() < full.vertexCount());
+        assertEquals(SurveyRoute.plan(port, stops, full).totalDistanceM(), SurveyRoute.plan(port, stops, clipped).totalDistanceM(), 1e-6);
+    }
+
+    @Test
+    void noStopsGivesAnEmptyRoute() {
+        Route r = SurveyRoute.plan(Stop.port("P", 0, 30), List.of());
+        assertTrue(r.legs().isEmpty());
+        assertEquals(0.0, r.totalDistanceM(), 0);
+        CruiseSchedule c = CruiseSchedule.of(r, ScheduleParameters.commonPractice(), java.time.Instant.parse("2025-01-01T00:00:00Z"));
+        assertEquals(0.0, c.totalDays(), 0);
+    }
+
     @Test
     void stopOnLandIsRejectedWithItsName() {
         Geometry island = poly(-1, 29, 1, 29, 1, 31, -1, 31);
@@ -201,5 +225,25 @@ class SurveyRouteTest {
             }
         }
         assertEquals(120 + 1, r.legs().size());
+    }
+
+    /**
+     * Across the antimeridian: 179°E → 179°W on the equator is 2° of the equator, a·2π/180 = 222.639 km (WGS 84
+     * a = 6 378 137 m), not 358°; an island given in continuous longitudes (179.6…180.4) is avoided.
+     */
+    @Test
+    void acrossTheAntimeridian() {
+        Route r = SurveyRoute.inOrder(Stop.port("P", 179.0, 0.0), List.of(new Stop("S", -179.0, 0.0, 4000, StopKind.CTD_STATION)),
+                Obstacles.none());
+        assertEquals(6_378_137.0 * Math.toRadians(2), r.legs().get(0).distanceM(), 1e-3);
+        Geometry island = poly(179.6, -0.3, 180.4, -0.3, 180.4, 0.3, 179.6, 0.3);
+        Obstacles obs = Obstacles.of(List.of(island), 2, 1);
+        Route around = SurveyRoute.inOrder(Stop.port("P", 179.0, 0.0), List.of(new Stop("S", 181.0, 0.0, 4000, StopKind.CTD_STATION)), obs);
+        Leg l = around.legs().get(0);
+        assertTrue(l.detours());
+        for (int q = 0; q + 1 < l.waypoints().size(); q++) {
+            double[] a = l.waypoints().get(q), b = l.waypoints().get(q + 1);
+            assertFalse(island.intersects(Obstacles.line(Geodesy.densify(a[0], a[1], b[0], b[1], 250))));
+        }
     }
 }
