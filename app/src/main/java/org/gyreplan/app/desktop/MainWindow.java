@@ -138,11 +138,11 @@ public class MainWindow extends BorderPane {
         tMsg.setId("tabMessages");
         rightTabs.getTabs().addAll(tValues, tPlan, tMsg);
         rightTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
-        rightTabs.setPrefWidth(340);
+        rightTabs.setPrefWidth(420);
         rightTabs.setMinWidth(240);
 
         SplitPane main = new SplitPane(layerPanel, centreSplit, rightTabs);
-        main.setDividerPositions(0.17, 0.77);
+        main.setDividerPositions(0.16, 0.71);
         SplitPane.setResizableWithParent(layerPanel, false);
         SplitPane.setResizableWithParent(rightTabs, false);
         setCenter(main);
