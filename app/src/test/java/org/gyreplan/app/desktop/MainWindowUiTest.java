@@ -134,6 +134,18 @@ class MainWindowUiTest {
         robot.clickOn("#layerUp");
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals(k + 1, window.map().layers().indexOf(land));
+
+        // a typed colour range for the signed curl layer stays centred on zero
+        MapLayer curl = layer("Wind-stress curl");
+        robot.interact(() -> window.layerPanel().list().getSelectionModel().select(curl));
+        robot.interact(() -> {
+            ((javafx.scene.control.TextField) robot.lookup("#rangeMin").query()).setText("-5e-8");
+            ((javafx.scene.control.TextField) robot.lookup("#rangeMax").query()).setText("2e-8");
+        });
+        robot.clickOn("#rangeApply");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(-5e-8, curl.colourScale().min(), 1e-20);
+        assertEquals(5e-8, curl.colourScale().max(), 1e-20);
     }
 
     @Test
@@ -166,6 +178,22 @@ class MainWindowUiTest {
         String curl = window.inspector().valueOf("Wind-stress curl");
         assertTrue(curl.endsWith("N m-3"), curl);
         assertNotNull(window.inspector().valueOf("Surface stress, magnitude"));
+
+        // scroll-zoom about the cursor keeps the place under it (within a pixel)
+        var v = window.map().viewport();
+        double scale = v.scale();
+        Point2D before = screenOf(lon, lat);
+        robot.moveTo(before);
+        robot.scroll(3, javafx.geometry.VerticalDirection.UP);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(Math.abs(v.scale() / scale - 1) > 0.01, "zoomed: " + scale + " → " + v.scale());
+        assertEquals(before.getX(), screenOf(lon, lat).getX(), 1.0);
+        assertEquals(before.getY(), screenOf(lon, lat).getY(), 1.0);
+        // in Mercator the same cell gives the same depth
+        robot.interact(() -> window.map().setProjection(org.gyreplan.app.desktop.map.MapProjection.MERCATOR));
+        robot.clickOn(screenOf(-30.5, 40.5));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(SyntheticStudy.depthAt(-30.5), Double.parseDouble(window.inspector().valueOf("Depth").split(" ")[0]), 0.5);
     }
 
     @Test
