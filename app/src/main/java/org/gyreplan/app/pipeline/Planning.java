@@ -147,7 +147,8 @@ final class Planning {
         ScheduleParameters base = ScheduleParameters.commonPractice();
         ScheduleParameters params = new ScheduleParameters(v.shipSpeedKnots, base.ctdDescentMpm(), base.ctdAscentMpm(),
                 v.stationTimeHours * 60.0, base.bottomClearanceM(), base.maxCastDepthM(), base.mooringDeploymentHours(),
-                base.mooringServiceHours(), base.daylightForMooring(), windows, windows, base.maxDowntimeFraction());
+                base.mooringServiceHours(), base.daylightForMooring(), windows, windows, base.maxDowntimeFraction(),
+                base.meanBadSpellHours());
         Instant departure = ScenarioValidator.parseInstant(v.start).orElse(st.times.length > 0 ? st.times[st.times.length - 1] : Instant.EPOCH);
         CruiseSchedule schedule = CruiseSchedule.of(route, params, departure);
         st.products.put(TRANSECTS, transects);

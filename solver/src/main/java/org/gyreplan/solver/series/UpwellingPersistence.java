@@ -32,8 +32,16 @@ import java.time.ZoneOffset;
 public record UpwellingPersistence(int validDays, int favourableDays, double favourableFraction, int runCount,
                                    double meanRunDays, int maxRunDays, int minRunDays, double longRunFraction) {
 
+    private static void requireDaily(TimeSeries ui) {
+        if (ui.medianStepSeconds() > 36L * 3600L) {
+            throw new IllegalArgumentException("series '" + ui.name() + "': persistence needs daily or sub-daily values, "
+                    + "got a median step of " + Math.round(ui.medianStepSeconds() / 86400.0) + " days");
+        }
+    }
+
     /** Persistence over the whole series (daily values, or sub-daily averaged to days). */
     public static UpwellingPersistence of(TimeSeries ui, int minRunDays) {
+        requireDaily(ui);
         if (ui.size() == 0) return compute(new double[0], minRunDays);
         AggregatedSeries days = Aggregation.daily(ui, ui.medianStepSeconds() >= 86400L
                 ? new Coverage(0.0, 1, 86400L) : Coverage.DEFAULT);
@@ -44,6 +52,7 @@ public record UpwellingPersistence(int validDays, int favourableDays, double fav
 
     /** Persistence between two dates (inclusive). */
     public static UpwellingPersistence of(TimeSeries ui, LocalDate from, LocalDate toInclusive, int minRunDays) {
+        requireDaily(ui);
         int n = (int) (toInclusive.toEpochDay() - from.toEpochDay() + 1);
         if (n < 1) throw new IllegalArgumentException("date range " + from + " … " + toInclusive + " is empty");
         long[] b = new long[n + 1];

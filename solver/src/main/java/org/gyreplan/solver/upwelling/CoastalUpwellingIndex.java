@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.IntFunction;
 
 /**
@@ -21,7 +22,7 @@ import java.util.function.IntFunction;
  *
  * <pre>
  *   Qₓ = τᵧ / (ρ₀ f),   Qᵧ = −τₓ / (ρ₀ f)                 (Ekman transport per unit width, m² s⁻¹)
- *   UI = 100 m · (Qₓ sin β + Qᵧ cos β)                     (m³ s⁻¹ per 100 m of coastline)
+ *   UI = 100 m · (Qₓ sin θₙ + Qᵧ cos θₙ)                   (m³ s⁻¹ per 100 m of coastline)
  *   f  = 2Ω sin φ
  * </pre>
  * <table>
@@ -29,7 +30,7 @@ import java.util.function.IntFunction;
  *   <tr><td>τₓ, τᵧ</td><td>eastward, northward surface stress on the ocean</td><td>Pa</td></tr>
  *   <tr><td>ρ₀</td><td>sea-water density (default 1025)</td><td>kg m⁻³</td></tr>
  *   <tr><td>f</td><td>Coriolis parameter at the coast point's latitude φ</td><td>s⁻¹</td></tr>
- *   <tr><td>β</td><td>offshore bearing of the coast point (unit normal into the ocean)</td><td>degrees from north</td></tr>
+ *   <tr><td>θₙ</td><td>offshore bearing of the coast point (unit normal into the ocean)</td><td>degrees from north</td></tr>
  *   <tr><td>UI</td><td>index</td><td>m³ s⁻¹ per 100 m of coastline</td></tr>
  * </table>
  * <p><b>Sign</b>: UI &gt; 0 is offshore transport (upwelling-favourable), UI &lt; 0 onshore (downwelling). The
@@ -39,7 +40,7 @@ import java.util.function.IntFunction;
  * <p><b>Validity</b>: steady Ekman balance, so the index is a daily or longer average; undefined near the equator:
  * within the cut-off ({@link EquatorialCutoff}, default 5°) it is NaN and flagged
  * {@link IndexFlag#EQUATORIAL_CUTOFF}. The latitude used for f is the coast point's, not the wind cell's.
- * <p><b>Sampling</b> of stress fields: {@link StressSampling#NEAREST_OCEAN} (default: the nearest cell with finite
+ * <p><b>Sampling</b> of stress fields: {@link StressSampling#NEAREST_OCEAN} (default: the nearest ocean cell with finite
  * stress) or {@link StressSampling#BILINEAR}; the distance from the point to the cell used is reported.
  * <p>The transport itself is {@link EkmanTransport#of}; this class adds the coast geometry and the sampling.
  * <p><b>Source</b>: Ekman transport, Ekman (1905) as written by Stewart, Introduction to Physical Oceanography,
@@ -55,6 +56,12 @@ public final class CoastalUpwellingIndex {
     private final EquatorialCutoff cutoff;
     private final StressSampling sampling;
     private final double maxDataDistanceKm;
+    /** Nearest-cell samplers by grid geometry and position (they do not depend on masks or values). */
+    private final ConcurrentHashMap<SamplerKey, FieldSampler> samplers = new ConcurrentHashMap<>();
+    private static final int MAX_CACHED_SAMPLERS = 4096;
+
+    private record SamplerKey(int nx, int ny, double lon0, double lat0, double dLon, double dLat, double radius,
+                              double lonDeg, double latDeg, StressSampling mode) { }
 
     /**
      * @param constants           ρ₀ and Ω are used
@@ -146,11 +153,15 @@ public final class CoastalUpwellingIndex {
     public List<PointIndex> atPoints(VectorField stressPa, List<CoastPoint> points) {
         checkStressUnits(stressPa);
         List<PointIndex> out = new ArrayList<>(points.size());
-        for (CoastPoint p : points) {
-            FieldSampler s = new FieldSampler(stressPa.grid(), p.lonDeg(), p.latDeg(), sampling);
-            out.add(sampleAndCompute(s, p, stressPa));
-        }
+        for (CoastPoint p : points) out.add(sampleAndCompute(sampler(stressPa.grid(), p), p, stressPa));
         return out;
+    }
+
+    private FieldSampler sampler(org.gyreplan.solver.grid.LonLatGrid g, CoastPoint p) {
+        SamplerKey key = new SamplerKey(g.nx(), g.ny(), g.lon0Deg(), g.lat0Deg(), g.dLonDeg(), g.dLatDeg(), g.radius(),
+                p.lonDeg(), p.latDeg(), sampling);
+        if (samplers.size() > MAX_CACHED_SAMPLERS) samplers.clear();
+        return samplers.computeIfAbsent(key, k -> new FieldSampler(g, p.lonDeg(), p.latDeg(), sampling));
     }
 
     private PointIndex sampleAndCompute(FieldSampler s, CoastPoint p, VectorField stress) {
@@ -180,9 +191,7 @@ public final class CoastalUpwellingIndex {
             if (first == null) {
                 first = st;
                 samplers = new FieldSampler[points.size()];
-                for (int q = 0; q < points.size(); q++) {
-                    samplers[q] = new FieldSampler(st.grid(), points.get(q).lonDeg(), points.get(q).latDeg(), sampling);
-                }
+                for (int q = 0; q < points.size(); q++) samplers[q] = sampler(st.grid(), points.get(q));
             } else if (!first.grid().sameGeometry(st.grid())) {
                 throw new IllegalArgumentException("stress field at step " + k + " (" + times.get(k)
                         + ") lies on another grid than step 0");

@@ -123,6 +123,8 @@ class SeriesTest {
                 LocalDate.of(2001, 1, 5), LocalDate.of(2001, 1, 6), 1);
         assertEquals(2, r.favourableDays());
         assertEquals(1, r.runCount());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> UpwellingPersistence.of(monthly132(), 3));
+        assertTrue(e.getMessage().contains("daily"), e.getMessage());
     }
 
     @Test

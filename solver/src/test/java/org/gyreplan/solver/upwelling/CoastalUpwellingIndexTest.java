@@ -157,6 +157,31 @@ class CoastalUpwellingIndexTest {
     }
 
     @Test
+    void nearestOceanFindsFarCellsAndFollowsTheMaskOfEachField() {
+        // 40×40 cells, the point in one corner; only the opposite corner is ocean (beyond the candidate list)
+        LonLatGrid g0 = new LonLatGrid(40, 40, 0.5, 10.5, 1, 1, 6.371e6, null);
+        boolean[] ocean = new boolean[g0.size()];
+        ocean[g0.index(39, 39)] = true;
+        CoastPoint p = CoastPoint.of("corner", 0.5, 10.5, 270);
+        CoastalUpwellingIndex ui = CoastalUpwellingIndex.defaults();
+        double[] z = new double[g0.size()], ty = new double[g0.size()];
+        Arrays.fill(ty, -0.1);
+        LonLatGrid g1 = g0.withOcean(ocean);
+        VectorField far = new VectorField(new ScalarField(g1, z, "tx", "Pa", null), new ScalarField(g1, ty, "ty", "Pa", null));
+        PointIndex r1 = ui.atPoints(far, List.of(p)).get(0);
+        double expect = 2 * 6371 * Math.asin(Math.sqrt(Math.pow(Math.sin(Math.toRadians(39) / 2), 2)
+                + Math.cos(Math.toRadians(10.5)) * Math.cos(Math.toRadians(49.5)) * Math.pow(Math.sin(Math.toRadians(39) / 2), 2)));
+        assertEquals(expect, r1.dataDistanceKm(), 1e-9);
+        // same geometry, another mask (the point's own cell is ocean): the cached sampler must not remember the mask
+        boolean[] all = new boolean[g0.size()];
+        Arrays.fill(all, true);
+        LonLatGrid g2 = g0.withOcean(all);
+        VectorField near = new VectorField(new ScalarField(g2, z, "tx", "Pa", null), new ScalarField(g2, ty, "ty", "Pa", null));
+        assertEquals(0.0, ui.atPoints(near, List.of(p)).get(0).dataDistanceKm(), 1e-12);
+        assertEquals(expect, ui.atPoints(far, List.of(p)).get(0).dataDistanceKm(), 1e-9);
+    }
+
+    @Test
     void rejectsStressInWrongUnits() {
         LonLatGrid g = new LonLatGrid(2, 2, 0.5, 30.5, 1, 1, 6.371e6, null);
         VectorField wind = new VectorField(new ScalarField(g, new double[4], "u", "m s-1", null),
