@@ -100,6 +100,7 @@ public class MainWindow extends BorderPane {
     private volatile boolean running;
     private double[] pinned;
     private double[] hoverAt;
+    private boolean movedPoints;
     private Consumer<String> titleSink = t -> { };
 
     /**
@@ -184,6 +185,7 @@ public class MainWindow extends BorderPane {
     /** Shows a study: rebuilds layers, time bar, plan and messages, and fits the map. */
     public void setStudy(MapStudy s) {
         study = s;
+        movedPoints = false;
         built = StudyLayers.build(s);
         map.layers().setAll(built.layers());
         built.moorings().addMoveListener(p -> pointMoved("Mooring site", p));
@@ -279,9 +281,12 @@ public class MainWindow extends BorderPane {
     }
 
     private void pointMoved(String what, MapPoint p) {
+        movedPoints = true;
         status.setText(what + " " + p.label() + " moved to " + org.gyreplan.app.desktop.map.Format.lat(p.latDeg())
                 + ", " + org.gyreplan.app.desktop.map.Format.lon(p.lonDeg()));
-        if (study.cruise != null) {
+        if (study.cruise != null && study.cruise.stops().stream().noneMatch(s -> s.id().equals(p.id()))) {
+            status.setText(status.getText() + " (not part of the cruise plan: schedule unchanged)");
+        } else if (study.cruise != null) {
             try {
                 study.cruise.move(p.id(), p.lonDeg(), p.latDeg());
                 showPlan();
@@ -333,7 +338,8 @@ public class MainWindow extends BorderPane {
         }
         try {
             scenarioFiles.save(scenario, study);
-            status.setText("Saved " + scenario);
+            status.setText("Saved " + scenario + (movedPoints
+                    ? " — moved sites and stations are not stored: the scenario chooses them by its rules" : ""));
         } catch (Exception ex) {
             error("Could not save " + scenario, ex);
         }
