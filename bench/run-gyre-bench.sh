@@ -50,8 +50,8 @@ run_scipy() {
 }
 
 echo "== Stommel ${NS}² (target ≤ 1 s wall on 2 cores, ≤ 400 MB)"
-run_java "java stommel $NS t$THREADS" stommel "$NS" "$THREADS" 400m "$OUT/s1.f64"
-run_java "java stommel $NS t1" stommel "$NS" 1 400m "$OUT/s1_t1.f64"
+run_java "java stommel $NS t$THREADS" stommel "$NS" "$THREADS" 280m "$OUT/s1.f64"
+run_java "java stommel $NS t1" stommel "$NS" 1 280m "$OUT/s1_t1.f64"
 cmp -s "$OUT/s1.f64" "$OUT/s1_t1.f64" && echo "threads 1 vs $THREADS: bit-identical" || echo "threads 1 vs $THREADS: DIFFERENT"
 if [ -z "${SKIP_SCIPY_STOMMEL:-}" ]; then
   run_scipy "scipy stommel $NS" stommel "$NS" "$OUT/s1.f64"

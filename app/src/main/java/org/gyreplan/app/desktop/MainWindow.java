@@ -100,6 +100,7 @@ public class MainWindow extends BorderPane {
     private volatile boolean running;
     private double[] pinned;
     private double[] hoverAt;
+    private boolean movedPoints;
     private Consumer<String> titleSink = t -> { };
 
     /**
@@ -138,11 +139,11 @@ public class MainWindow extends BorderPane {
         tMsg.setId("tabMessages");
         rightTabs.getTabs().addAll(tValues, tPlan, tMsg);
         rightTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
-        rightTabs.setPrefWidth(340);
+        rightTabs.setPrefWidth(420);
         rightTabs.setMinWidth(240);
 
         SplitPane main = new SplitPane(layerPanel, centreSplit, rightTabs);
-        main.setDividerPositions(0.17, 0.77);
+        main.setDividerPositions(0.16, 0.71);
         SplitPane.setResizableWithParent(layerPanel, false);
         SplitPane.setResizableWithParent(rightTabs, false);
         setCenter(main);
@@ -184,6 +185,7 @@ public class MainWindow extends BorderPane {
     /** Shows a study: rebuilds layers, time bar, plan and messages, and fits the map. */
     public void setStudy(MapStudy s) {
         study = s;
+        movedPoints = false;
         built = StudyLayers.build(s);
         map.layers().setAll(built.layers());
         built.moorings().addMoveListener(p -> pointMoved("Mooring site", p));
@@ -279,9 +281,12 @@ public class MainWindow extends BorderPane {
     }
 
     private void pointMoved(String what, MapPoint p) {
+        movedPoints = true;
         status.setText(what + " " + p.label() + " moved to " + org.gyreplan.app.desktop.map.Format.lat(p.latDeg())
                 + ", " + org.gyreplan.app.desktop.map.Format.lon(p.lonDeg()));
-        if (study.cruise != null) {
+        if (study.cruise != null && study.cruise.stops().stream().noneMatch(s -> s.id().equals(p.id()))) {
+            status.setText(status.getText() + " (not part of the cruise plan: schedule unchanged)");
+        } else if (study.cruise != null) {
             try {
                 study.cruise.move(p.id(), p.lonDeg(), p.latDeg());
                 showPlan();
@@ -333,7 +338,8 @@ public class MainWindow extends BorderPane {
         }
         try {
             scenarioFiles.save(scenario, study);
-            status.setText("Saved " + scenario);
+            status.setText("Saved " + scenario + (movedPoints
+                    ? " — moved sites and stations are not stored: the scenario chooses them by its rules" : ""));
         } catch (Exception ex) {
             error("Could not save " + scenario, ex);
         }
@@ -368,6 +374,7 @@ public class MainWindow extends BorderPane {
             finishRun();
             setStudy(t.getValue());
             status.setText("Study finished" + (study.warnings.isEmpty() ? "" : " with " + study.warnings.size() + " warning(s)"));
+            System.err.println("gyreplan desktop: " + status.getText());
         });
         t.setOnCancelled(e -> { finishRun(); status.setText("Run cancelled"); });
         t.setOnFailed(e -> {
@@ -425,6 +432,7 @@ public class MainWindow extends BorderPane {
     /** Shows a readable error in the status bar, the messages list and (unless turned off) a dialog. */
     public void error(String what, Throwable ex) {
         String text = what + (ex == null ? "" : ": " + describe(ex));
+        System.err.println("gyreplan desktop: " + text);
         status.setText(text);
         messages.getItems().add(0, "Error — " + text);
         rightTabs.getTabs().get(2).setText("Messages (" + messages.getItems().size() + ")");
@@ -462,10 +470,12 @@ public class MainWindow extends BorderPane {
         png.setOnAction(e -> choosePng());
         MenuItem outputs = new MenuItem("Show study outputs");
         outputs.setOnAction(e -> showOutputs());
+        MenuItem copyOut = new MenuItem("Export study outputs to folder…");
+        copyOut.setOnAction(e -> chooseOutputCopy());
         MenuItem quit = new MenuItem("Quit");
         quit.setOnAction(e -> Platform.exit());
         Menu file = new Menu("File", null, open, save, new javafx.scene.control.SeparatorMenuItem(), importBasin, importExcl,
-                new javafx.scene.control.SeparatorMenuItem(), png, outputs, new javafx.scene.control.SeparatorMenuItem(), quit);
+                new javafx.scene.control.SeparatorMenuItem(), png, outputs, copyOut, new javafx.scene.control.SeparatorMenuItem(), quit);
         MenuItem run = new MenuItem("Run study");
         run.setOnAction(e -> runStudy());
         MenuItem cancel = new MenuItem("Cancel run");
@@ -595,6 +605,40 @@ public class MainWindow extends BorderPane {
         } catch (IOException ex) {
             error("Could not write " + f, ex);
         }
+    }
+
+    private void chooseOutputCopy() {
+        if (study.outputs.isEmpty()) {
+            error("No outputs yet: run the study first.", null);
+            return;
+        }
+        javafx.stage.DirectoryChooser dc = new javafx.stage.DirectoryChooser();
+        dc.setTitle("Export study outputs to");
+        File d = dc.showDialog(window());
+        if (d == null) return;
+        try {
+            int n = exportOutputs(d.toPath());
+            status.setText("Copied " + n + " output files to " + d);
+        } catch (IOException ex) {
+            error("Could not copy the outputs to " + d, ex);
+        }
+    }
+
+    /**
+     * Copies every file the run wrote (CF netCDF, GeoTIFF, GeoJSON, GeoPackage, GPX, KML, CSV, maps, report…)
+     * into a folder, keeping their relative paths; each file is written atomically. Returns the number copied.
+     */
+    public int exportOutputs(Path folder) throws IOException {
+        int n = 0;
+        for (var e : study.outputs.entrySet()) {
+            Path src = Path.of(e.getValue());
+            Path rel = Path.of(e.getKey());
+            if (rel.isAbsolute() || rel.normalize().startsWith("..")) rel = src.getFileName();
+            Path target = folder.resolve(rel.normalize());
+            AtomicWrite.toFile(target, tmp -> java.nio.file.Files.copy(src, tmp));
+            n++;
+        }
+        return n;
     }
 
     private void showOutputs() {

@@ -21,6 +21,7 @@ import org.gyreplan.solver.gyre.GyreException;
 import org.gyreplan.solver.gyre.GyreProblem;
 import org.gyreplan.solver.gyre.GyreSolution;
 import org.gyreplan.solver.gyre.GyreSolver;
+import org.gyreplan.solver.gyre.Sverdrup;
 import org.gyreplan.solver.gyre.WallCondition;
 import org.gyreplan.solver.plan.zones.UpwellingStatistics;
 import org.gyreplan.solver.progress.CancelToken;
@@ -433,15 +434,28 @@ public final class StudyPipeline {
         }
         VectorField tau = new VectorField(new ScalarField(g, tx, tauWind.eastward().name(), "Pa", tauWind.eastward().longName()),
                 new ScalarField(g, ty, tauWind.northward().name(), "Pa", tauWind.northward().longName()));
+        if (s.gyre.model == Scenario.GyreModel.SVERDRUP) {
+            // the frictionless interior: no boundary layer, no linear solve (Sverdrup 1947)
+            ScalarField psi = Sverdrup.streamfunction(tau, Geometry.sphere(), st.constants);
+            st.fields.put("streamfunction", psi);
+            double[] r = psi.range();
+            st.headlines.put(Headline.MAX_STREAMFUNCTION, r[1]);
+            st.headlines.put(Headline.MIN_STREAMFUNCTION, r[0]);
+            st.headlines.put(Headline.MAX_SVERDRUP, r[1]);
+            st.provenanceExtra.put("gyre grid", g.nx() + " × " + g.ny() + " cells of " + d + "°, " + g.oceanCount() + " ocean");
+            st.progress.progress("gyre", 1.0, String.format(Locale.ROOT, "Sverdrup ψ %.1f…%.1f Sv", r[0], r[1]));
+            return;
+        }
+        // results are bit-identical for any thread count (GyreSolverBehaviourTest), so use the machine's cores
         GyreProblem.Builder pb = GyreProblem.on(g).stress(tau).constants(st.constants).depth(s.gyre.depth)
-                .geometry(Geometry.sphere()).options(GyreProblem.Options.defaults().withThreads(1));
+                .geometry(Geometry.sphere()).options(GyreProblem.Options.defaults());
         switch (s.gyre.model) {
             case STOMMEL -> pb.stommel(s.gyre.bottomFriction);
             case MUNK -> {
                 pb.munk(s.gyre.lateralViscosity, s.gyre.wall == Scenario.Wall.FREE_SLIP ? WallCondition.FREE_SLIP : WallCondition.NO_SLIP);
                 if (s.gyre.bottomFriction != null) pb.stommel(s.gyre.bottomFriction);
             }
-            case SVERDRUP -> pb.stommel(s.gyre.bottomFriction != null ? s.gyre.bottomFriction : 0.0);
+            case SVERDRUP -> throw new IllegalStateException("handled above");
         }
         GyreSolution sol;
         try {
@@ -453,7 +467,7 @@ public final class StudyPipeline {
         } catch (IllegalArgumentException ex) {
             throw new StudyException(s.sourceFile, "gyre", ex.getMessage(), ex);
         }
-        ScalarField psi = s.gyre.model == Scenario.GyreModel.SVERDRUP ? sol.sverdrup() : sol.streamfunction();
+        ScalarField psi = sol.streamfunction();
         st.fields.put("streamfunction", psi);
         st.gyre = sol;
         for (String w : sol.warnings()) {

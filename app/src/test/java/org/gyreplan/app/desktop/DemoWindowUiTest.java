@@ -93,10 +93,37 @@ class DemoWindowUiTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(window.statusText().startsWith("Study finished"), window.statusText());
         assertFalse(window.study().scalars.isEmpty());
+        assertFalse(window.study().indexPoints.isEmpty(), "coastal index points");
+        // July of the first year, then the charts of the first index point
+        robot.interact(() -> window.timeBar().setStep(6));
+        var ip = window.study().indexPoints.get(0);
+        robot.interact(() -> {
+            var v = window.map().viewport();
+            window.map().canvas().localToScreen(v.screenX(ip.lonDeg()), v.screenY(ip.latDeg()));
+        });
+        robot.clickOn(window.map().canvas().localToScreen(window.map().viewport().screenX(ip.lonDeg()),
+                window.map().viewport().screenY(ip.latDeg())));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(ip.id(), window.charts().shownId());
+        if (window.study().cruise != null) {
+            assertFalse(window.plan().table().getItems().isEmpty(), "schedule shown");
+            var st = window.study().stations.isEmpty() ? window.study().moorings.get(0) : window.study().stations.get(0);
+            String before = window.plan().totalsText();
+            robot.interact(() -> {
+                window.study().cruise.move(st.id(), st.lonDeg() - 0.3, st.latDeg());
+            });
+            assertFalse(before.isEmpty());
+        }
         Path dir = Path.of("target", "screenshots");
         Files.createDirectories(dir);
         WritableImage[] img = new WritableImage[1];
         robot.interact(() -> img[0] = stage.getScene().snapshot(null));
         ImageIO.write(javafx.embed.swing.SwingFXUtils.fromFXImage(img[0], null), "png", dir.resolve("demo-result.png").toFile());
+        robot.clickOn(robot.lookup(".tab-label").match(n -> "Plan".equals(((javafx.scene.control.Labeled) n).getText()))
+                .queryAs(javafx.scene.Node.class));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(robot.lookup("#caution").queryLabeled().isVisible(), "caution visible with the plan");
+        robot.interact(() -> img[0] = stage.getScene().snapshot(null));
+        ImageIO.write(javafx.embed.swing.SwingFXUtils.fromFXImage(img[0], null), "png", dir.resolve("demo-plan.png").toFile());
     }
 }

@@ -48,6 +48,8 @@ class MainWindowUiTest {
     private final CountDownLatch started = new CountDownLatch(1);
     private final AtomicInteger loops = new AtomicInteger();
 
+    @org.junit.jupiter.api.io.TempDir Path tmp;
+
     @Start
     void start(Stage stage) throws Exception {
         this.stage = stage;
@@ -61,7 +63,7 @@ class MainWindowUiTest {
             }
             return SyntheticStudy.build();
         };
-        Path scen = Files.createTempDirectory("gyreplan-ui").resolve("scenario.yaml");
+        Path scen = tmp.resolve("scenario.yaml");
         Files.writeString(scen, "# test placeholder\n");
         window = new MainWindow(runner, null, scen);
         window.setDialogs(false);
@@ -101,6 +103,18 @@ class MainWindowUiTest {
         });
         var read = ImageIO.read(png.toFile());
         assertEquals((int) window.map().canvas().getWidth(), read.getWidth());
+
+        // export of the run's files: copied byte for byte under their relative paths
+        Path runDir = Files.createDirectories(tmp.resolve("run"));
+        Files.createDirectories(runDir.resolve("maps"));
+        Files.write(runDir.resolve("maps/psi.png"), new byte[] {1, 2, 3});
+        Files.writeString(runDir.resolve("index.csv"), "a,b\n1,2\n");
+        window.study().outputs.put("maps/psi.png", runDir.resolve("maps/psi.png").toString());
+        window.study().outputs.put("index.csv", runDir.resolve("index.csv").toString());
+        Path dest = tmp.resolve("export");
+        assertEquals(2, window.exportOutputs(dest));
+        assertEquals(-1, Files.mismatch(runDir.resolve("maps/psi.png"), dest.resolve("maps/psi.png")));
+        assertEquals(-1, Files.mismatch(runDir.resolve("index.csv"), dest.resolve("index.csv")));
     }
 
     @Test
@@ -120,6 +134,18 @@ class MainWindowUiTest {
         robot.clickOn("#layerUp");
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals(k + 1, window.map().layers().indexOf(land));
+
+        // a typed colour range for the signed curl layer stays centred on zero
+        MapLayer curl = layer("Wind-stress curl");
+        robot.interact(() -> window.layerPanel().list().getSelectionModel().select(curl));
+        robot.interact(() -> {
+            ((javafx.scene.control.TextField) robot.lookup("#rangeMin").query()).setText("-5e-8");
+            ((javafx.scene.control.TextField) robot.lookup("#rangeMax").query()).setText("2e-8");
+        });
+        robot.clickOn("#rangeApply");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(-5e-8, curl.colourScale().min(), 1e-20);
+        assertEquals(5e-8, curl.colourScale().max(), 1e-20);
     }
 
     @Test
@@ -152,6 +178,22 @@ class MainWindowUiTest {
         String curl = window.inspector().valueOf("Wind-stress curl");
         assertTrue(curl.endsWith("N m-3"), curl);
         assertNotNull(window.inspector().valueOf("Surface stress, magnitude"));
+
+        // scroll-zoom about the cursor keeps the place under it (within a pixel)
+        var v = window.map().viewport();
+        double scale = v.scale();
+        Point2D before = screenOf(lon, lat);
+        robot.moveTo(before);
+        robot.scroll(3, javafx.geometry.VerticalDirection.UP);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(Math.abs(v.scale() / scale - 1) > 0.01, "zoomed: " + scale + " → " + v.scale());
+        assertEquals(before.getX(), screenOf(lon, lat).getX(), 1.0);
+        assertEquals(before.getY(), screenOf(lon, lat).getY(), 1.0);
+        // in Mercator the same cell gives the same depth
+        robot.interact(() -> window.map().setProjection(org.gyreplan.app.desktop.map.MapProjection.MERCATOR));
+        robot.clickOn(screenOf(-30.5, 40.5));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(SyntheticStudy.depthAt(-30.5), Double.parseDouble(window.inspector().valueOf("Depth").split(" ")[0]), 0.5);
     }
 
     @Test

@@ -54,6 +54,51 @@ class StudyPipelineTest {
     }
 
     @Test
+    void sverdrupModelGivesTheAnalyticInteriorTransportForUniformWesterlies() throws Exception {
+        // Uniform eastward stress tau_x on the sphere has curl tau = tau_x tan(phi) / R (spherical curl of a uniform
+        // zonal field), so the Sverdrup relation beta V = curl tau / rho0 (Sverdrup 1947; Stewart eq. 11.6) gives
+        // V = tau_x sin(phi) / (2 Omega rho0 cos^2 phi) and, integrated westward from the eastern coast,
+        // psi(x) = -V (x_E - x). 10 m/s from the west, C_D 1.3e-3, rho_a 1.22: tau_x = 0.1586 Pa (CHECKS UI-05).
+        StringBuilder csv = new StringBuilder("time,speed [m/s],direction [deg]\n");
+        for (int d = 1; d <= 3; d++) csv.append(String.format("2021-07-%02dT00:00:00Z,10,270%n", d));
+        Files.writeString(dir.resolve("westerly.csv"), csv.toString());
+        Path sf = dir.resolve("sverdrup.yaml");
+        Files.writeString(sf, """
+                study: {name: Sverdrup test}
+                basin:
+                  coordinates: [[-134, 30], [-124, 30], [-124, 42], [-134, 42]]
+                winds:
+                  source: station
+                  file: westerly.csv
+                  station: {name: Buoy, lonDeg: -129, latDeg: 36}
+                dragLaw: {name: constant, dragCoefficient: 0.0013}
+                gyre: {model: sverdrup, depth: 1000}
+                grid: {spacingDeg: 0.5}
+                coast:
+                  points: [{name: East Coast 36N, lonDeg: -124, latDeg: 36}]
+                  smoothingKm: 50
+                outputs: [csv]
+                """);
+        StudyResult r = new StudyPipeline().run(ScenarioFiles.load(sf), dir.resolve("out"), null, null);
+        org.gyreplan.solver.grid.ScalarField psi = r.field("streamfunction").orElseThrow();
+        org.gyreplan.solver.grid.LonLatGrid g = psi.grid();
+        int j = (int) Math.round(g.rowOf(36.25));
+        double lat = g.latDeg(j);
+        double west = Double.NaN, xWest = Double.NaN;
+        for (int i = 0; i < g.nx(); i++) {
+            if (Double.isFinite(psi.at(i, j))) { west = psi.at(i, j); xWest = g.lonDeg(i); break; }
+        }
+        double tauX = 1.22 * 1.3e-3 * 10 * 10, omega = 7.292115e-5, rho0 = 1025, radius = 6.371e6;
+        double phi = Math.toRadians(lat);
+        double v = tauX * Math.sin(phi) / (2 * omega * rho0 * Math.cos(phi) * Math.cos(phi));
+        double width = radius * Math.cos(phi) * Math.toRadians(-124 - xWest);
+        double expectedSv = -v * width / 1e6;
+        // tolerance: one 0.5° cell of the 10° integration path (the coast lies between cell centres)
+        assertEquals(expectedSv, west, Math.abs(expectedSv) * 0.06, "Sverdrup psi at the western edge, row " + lat);
+        assertTrue(west < 0, "northward interior flow under westerlies gives psi < 0 west of the eastern coast");
+    }
+
+    @Test
     void sha256OfAKnownText() throws Exception {
         Path f = dir.resolve("abc.txt");
         Files.writeString(f, "abc");

@@ -214,10 +214,17 @@ public final class GyreSolver {
 
     /** Wind-stress curl (N m⁻³) from the stress field with centred differences (one-sided next to gaps). */
     static double[] curlOf(GyreProblem p) {
-        LonLatGrid g = p.grid();
-        Geometry geom = p.geometry();
+        return curlOf(p.grid(), p.stress(), p.geometry());
+    }
+
+    /**
+     * Wind-stress curl (N m⁻³) with the grid metrics: sphere curl τ = (1/(R cos φ)) [∂τ_y/∂λ − ∂(τ_x cos φ)/∂φ],
+     * β-plane ∂τ_y/∂x − ∂τ_x/∂y; centred differences, one-sided where a neighbour is missing (NaN) or outside the
+     * grid, NaN where both are missing.
+     */
+    static double[] curlOf(LonLatGrid g, org.gyreplan.solver.grid.VectorField stress, Geometry geom) {
         int nx = g.nx(), ny = g.ny();
-        double[] tx = p.stress().eastward().values(), ty = p.stress().northward().values();
+        double[] tx = stress.eastward().values(), ty = stress.northward().values();
         double dy = geom.dy(g);
         double[] out = new double[nx * ny];
         for (int j = 0; j < ny; j++) {
@@ -250,6 +257,10 @@ public final class GyreSolver {
         return cosWeighted == null ? x : x * geom.cosFactor(g.latDeg(j));
     }
 
+    /**
+     * Warns when the western boundary layer spans fewer than 3 cells of Δx at some row of the main basin. With both
+     * frictions the wider of δ_S = r/β and δ_M = (A_H/β)^(1/3) sets the layer (the narrower one is then irrelevant).
+     */
     private static void resolutionGuard(GyreProblem p, GyreOperator op, List<String> warnings) {
         LonLatGrid g = p.grid();
         double worst = Double.POSITIVE_INFINITY, worstLat = Double.NaN, worstWidth = Double.NaN, worstDx = Double.NaN;

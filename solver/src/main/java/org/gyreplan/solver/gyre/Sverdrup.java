@@ -84,4 +84,20 @@ public final class Sverdrup {
         return new ScalarField(g, psi, "sverdrup_streamfunction", "Sv",
                 "Sverdrup streamfunction; northward transport = d(psi)/dx, zero on the eastern coast of each row");
     }
+
+    /**
+     * Sverdrup streamfunction in Sv from the wind stress (Pa): the curl is taken with the grid metrics of
+     * {@code geom} (centred differences, one-sided next to missing values), then integrated westward from the eastern
+     * coast of every zonal ocean segment of the grid's mask. Needs no friction parameter (interior balance only).
+     */
+    public static ScalarField streamfunction(org.gyreplan.solver.grid.VectorField stress, Geometry geom, PhysicalConstants pc) {
+        LonLatGrid g = stress.grid();
+        if (!"Pa".equals(stress.units()) && !"N m-2".equals(stress.units())) {
+            throw new GyreException(GyreException.Reason.BAD_FORCING,
+                    "wind stress: expected units 'Pa' (N m-2), got '" + stress.units() + "'");
+        }
+        double[] c = GyreSolver.curlOf(g, stress, geom);
+        ScalarField curl = new ScalarField(g, c, "wind_stress_curl", "N m-3", "curl of the wind stress '" + stress.eastward().name() + "'");
+        return streamfunction(curl, geom, pc);
+    }
 }

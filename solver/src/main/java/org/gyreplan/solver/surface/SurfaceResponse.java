@@ -35,8 +35,10 @@ import java.util.Objects;
  * inside the equatorial cut-off transport and pumping are {@code NaN} and counted; wind speeds outside the drag law's
  * range are counted. Sources: see {@link WindStress}, {@link EkmanTransport}, {@link EkmanPumping}.
  *
- * <p>Performance: three passes over flat arrays (stress, curl, transport + pumping), per-row factors computed once
- * per grid, no boxing; an instance may be reused for every time step and by several threads.
+ * <p>Performance: two passes over flat arrays (stress; then per row curl, transport and pumping), per-row factors,
+ * the count of cut-off cells and the prepared curl operator ({@link SphericalOperators#on}) computed once per grid
+ * object, no boxing. Output arrays are new per step, or reused with {@link #fromWind(VectorField, Step)}. An
+ * instance may be reused for every time step and by several threads.
  */
 public final class SurfaceResponse {
     private final DragLaw dragLaw;
@@ -79,20 +81,42 @@ public final class SurfaceResponse {
         return new SurfaceResponse(null, constants, cutoff).fromStress(stressPa);
     }
 
-    /** The response to a 10 m wind field (m s⁻¹). */
+    /** The response to a 10 m wind field (m s⁻¹); every call allocates its six output arrays. */
     public Step fromWind(VectorField wind10m) {
+        return fromWind(wind10m, null);
+    }
+
+    /**
+     * The response to a 10 m wind field (m s⁻¹), writing into the arrays of {@code reuse} when it is a previous
+     * result on the same grid object (otherwise new arrays are allocated, as {@link #fromWind(VectorField)}).
+     * The fields of {@code reuse} are overwritten and the returned step shares them, so keep nothing from the
+     * previous step that is still needed; the wind arrays must not be among them.
+     * Usage in a time loop: {@code Step s = null; for (...) { s = response.fromWind(wind, s); use(s); }}
+     *
+     * @param reuse a step returned earlier by this class, or {@code null}
+     */
+    public Step fromWind(VectorField wind10m, Step reuse) {
         if (dragLaw == null) throw new IllegalStateException("no drag law given: cannot turn wind into stress");
         LonLatGrid g = wind10m.grid();
         WindStress.requireWindUnits(wind10m);
-        double[] tx = new double[g.size()];
-        double[] ty = new double[g.size()];
+        Step into = reusable(reuse, g);
+        double[] tx = into != null ? into.stress().eastward().values() : new double[g.size()];
+        double[] ty = into != null ? into.stress().northward().values() : new double[g.size()];
         int out = WindStress.compute(g, wind10m.eastward().values(), wind10m.northward().values(), dragLaw,
                 constants.rhoAir(), tx, ty);
-        return respond(g, tx, ty, out);
+        return respond(g, tx, ty, out, into);
     }
 
     /** The response to a surface stress field (Pa). */
     public Step fromStress(VectorField stressPa) {
+        return fromStress(stressPa, null);
+    }
+
+    /**
+     * The response to a surface stress field (Pa), reusing the arrays of {@code reuse} as in
+     * {@link #fromWind(VectorField, Step)}.
+     */
+    public Step fromStress(VectorField stressPa, Step reuse) {
         String units = stressPa.units().trim();
         if (!(units.equals("Pa") || units.equals("N m-2") || units.equals("N/m2") || units.equals("N m**-2"))) {
             throw new IllegalArgumentException("stress field '" + stressPa.eastward().name()
@@ -100,55 +124,80 @@ public final class SurfaceResponse {
         }
         LonLatGrid g = stressPa.grid();
         int n = g.size();
-        double[] tx = new double[n];
-        double[] ty = new double[n];
+        Step into = reusable(reuse, g);
+        double[] tx = into != null ? into.stress().eastward().values() : new double[n];
+        double[] ty = into != null ? into.stress().northward().values() : new double[n];
         double[] sx = stressPa.eastward().values(), sy = stressPa.northward().values();
         for (int k = 0; k < n; k++) {
-            boolean ok = g.isOcean(k) && Double.isFinite(sx[k]) && Double.isFinite(sy[k]);
-            tx[k] = ok ? sx[k] : Double.NaN;
-            ty[k] = ok ? sy[k] : Double.NaN;
+            double a = sx[k], b = sy[k];
+            boolean ok = g.isOcean(k) && Double.isFinite(a) && Double.isFinite(b);
+            tx[k] = ok ? a : Double.NaN;
+            ty[k] = ok ? b : Double.NaN;
         }
-        return respond(g, tx, ty, 0);
+        return respond(g, tx, ty, 0, into);
     }
 
-    private Step respond(LonLatGrid g, double[] tx, double[] ty, int dragOut) {
+    private static Step reusable(Step reuse, LonLatGrid g) {
+        return reuse != null && reuse.stress().grid() == g && reuse.stressCurl().grid() == g
+                && reuse.ekmanTransport().grid() == g && reuse.ekmanPumping().grid() == g ? reuse : null;
+    }
+
+    /** Curl, transport and pumping in one pass over the rows (each row's curl is used while still in cache). */
+    private Step respond(LonLatGrid g, double[] tx, double[] ty, int dragOut, Step into) {
         int n = g.size(), nx = g.nx(), ny = g.ny();
-        double[] curl = new double[n];
-        SphericalOperators.curl(g, tx, ty, curl);
         RowFactors r = rowFactors(g);
-        double[] ue = new double[n], ve = new double[n], w = new double[n];
-        int masked = 0;
+        double[] curl, ue, ve, w;
+        if (into != null) {
+            curl = into.stressCurl().values();
+            ue = into.ekmanTransport().eastward().values();
+            ve = into.ekmanTransport().northward().values();
+            w = into.ekmanPumping().values();
+        } else {
+            curl = new double[n];
+            ue = new double[n];
+            ve = new double[n];
+            w = new double[n];
+        }
+        SphericalOperators.OnGrid ops = r.ops;
         for (int j = 0; j < ny; j++) {
+            ops.curlRow(tx, ty, curl, j);
             double a = r.invRho0F[j], b = r.betaOverRho0F2[j];
-            boolean cut = r.cut[j];
             int row = j * nx;
             for (int k = row; k < row + nx; k++) {
-                if (cut && g.isOcean(k)) masked++;
                 double x = tx[k];
                 ue[k] = ty[k] * a;
                 ve[k] = -x * a;
                 w[k] = curl[k] * a + x * b;
             }
         }
+        if (into != null) {
+            return new Step(into.stress(), into.stressCurl(), into.ekmanTransport(), into.ekmanPumping(),
+                    r.cutoffOceanCells, dragOut);
+        }
         return new Step(WindStress.stressField(g, tx, ty), EkmanPumping.curlField(g, curl),
-                EkmanTransport.field(g, ue, ve), EkmanPumping.pumpingField(g, w), masked, dragOut);
+                EkmanTransport.field(g, ue, ve), EkmanPumping.pumpingField(g, w), r.cutoffOceanCells, dragOut);
     }
 
     private RowFactors rowFactors(LonLatGrid g) {
         RowFactors r = rows;
-        if (r == null || !r.grid.sameGeometry(g)) {
+        if (r == null || r.grid != g) {
             r = new RowFactors(g, constants, cutoff);
             rows = r;
         }
         return r;
     }
 
-    /** 1/(ρ₀ f) and β/(ρ₀ f²) per row, NaN inside the cut-off. */
+    /**
+     * Per grid object (its mask included): 1/(ρ₀ f) and β/(ρ₀ f²) per row (NaN inside the cut-off), the number of
+     * ocean cells inside the cut-off, and the prepared curl operator. Immutable once built.
+     */
     private static final class RowFactors {
         final LonLatGrid grid;
         final double[] invRho0F;
         final double[] betaOverRho0F2;
         final boolean[] cut;
+        final int cutoffOceanCells;
+        final SphericalOperators.OnGrid ops;
 
         RowFactors(LonLatGrid g, PhysicalConstants c, EquatorialCutoff cutoff) {
             grid = g;
@@ -168,6 +217,13 @@ public final class SurfaceResponse {
                     betaOverRho0F2[j] = c.beta(lat) / (c.rho0() * f * f);
                 }
             }
+            int masked = 0;
+            for (int j = 0; j < ny; j++) {
+                if (!cut[j]) continue;
+                for (int k = j * g.nx(), end = k + g.nx(); k < end; k++) if (g.isOcean(k)) masked++;
+            }
+            cutoffOceanCells = masked;
+            ops = SphericalOperators.on(g);
         }
     }
 }

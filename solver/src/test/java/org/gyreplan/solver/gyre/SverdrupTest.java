@@ -73,4 +73,19 @@ class SverdrupTest {
         assertEquals(GyreException.Reason.BAD_FORCING, e.reason());
         assertTrue(e.getMessage().contains("(4,1)"), e.getMessage());
     }
+
+    @Test
+    void streamfunctionFromStressNeedsNoFriction() {
+        // τ_x = −τ₀ y/L on a β-plane row set-up → curl τ = τ₀/L; compare with the curl-based integration (rel 1e-12)
+        LonLatGrid g = row30(50);
+        double[] tx = new double[g.size()], ty = new double[g.size()];
+        double dy = g.radius() * Math.toRadians(g.dLatDeg());
+        for (int j = 0; j < g.ny(); j++) for (int i = 0; i < g.nx(); i++) tx[g.index(i, j)] = -0.1 * (j * dy) / 1e6;
+        var tau = new org.gyreplan.solver.grid.VectorField(new ScalarField(g, tx, "tauu", "Pa", "x"), new ScalarField(g, ty, "tauv", "Pa", "y"));
+        Geometry bp = Geometry.betaPlane(30);
+        ScalarField fromStress = Sverdrup.streamfunction(tau, bp, PC);
+        ScalarField fromCurl = Sverdrup.streamfunction(GyreTestSupport.curlLonLat(g, (lon, lat) -> 0.1 / 1e6), bp, PC);
+        for (int i = 1; i <= 50; i++) assertEquals(fromCurl.at(i, 1), fromStress.at(i, 1), 1e-9 * Math.abs(fromCurl.at(1, 1)));
+        assertTrue(fromStress.at(1, 1) < 0);       // positive curl → northward interior → ψ decreases westward
+    }
 }

@@ -124,4 +124,59 @@ class SurfaceResponseTest {
         assertThrows(IllegalStateException.class,
                 () -> new SurfaceResponse(null, C, EquatorialCutoff.DEFAULT).fromWind(wind));
     }
+
+    @Test
+    void reusedOutputArraysGiveTheSameBitsAndAreOnlyReusedOnTheSameGrid() {
+        VectorField wind = wind();
+        SurfaceResponse response = new SurfaceResponse(LAW, C, EquatorialCutoff.DEFAULT);
+        SurfaceResponse.Step fresh = response.fromWind(wind);
+        // a previous step filled with other values must be overwritten completely
+        double[] u2 = wind.eastward().values().clone(), v2 = wind.northward().values().clone();
+        for (int k = 0; k < u2.length; k++) { u2[k] = -2 * u2[k] + 1; v2[k] = 0.5 * v2[k]; }
+        LonLatGrid g = wind.grid();
+        SurfaceResponse.Step prev = response.fromWind(new VectorField(new ScalarField(g, u2, "u10", "m s-1", null),
+                new ScalarField(g, v2, "v10", "m s-1", null)));
+        double[] prevPumping = prev.ekmanPumping().values();
+        SurfaceResponse.Step reused = response.fromWind(wind, prev);
+        assertSame(prevPumping, reused.ekmanPumping().values(), "arrays of the previous step are reused");
+        assertArrayEquals(fresh.stress().eastward().values(), reused.stress().eastward().values());
+        assertArrayEquals(fresh.stress().northward().values(), reused.stress().northward().values());
+        assertArrayEquals(fresh.stressCurl().values(), reused.stressCurl().values());
+        assertArrayEquals(fresh.ekmanTransport().eastward().values(), reused.ekmanTransport().eastward().values());
+        assertArrayEquals(fresh.ekmanTransport().northward().values(), reused.ekmanTransport().northward().values());
+        assertArrayEquals(fresh.ekmanPumping().values(), reused.ekmanPumping().values());
+        assertEquals(fresh.cutoffCells(), reused.cutoffCells());
+        assertEquals(fresh.dragOutOfRangeCells(), reused.dragOutOfRangeCells());
+        // from stress, reusing the same step (input and output share the stress arrays): still the same bits
+        SurfaceResponse.Step again = response.fromStress(reused.stress(), reused);
+        assertArrayEquals(fresh.ekmanPumping().values(), again.ekmanPumping().values());
+        // another grid object (same geometry, other mask): new arrays, not the old ones
+        boolean[] mask = g.oceanMask();
+        mask[g.index(10, 10)] = false;
+        LonLatGrid g2 = g.withOcean(mask);
+        SurfaceResponse.Step other = response.fromWind(new VectorField(
+                new ScalarField(g2, wind.eastward().values(), "u10", "m s-1", null),
+                new ScalarField(g2, wind.northward().values(), "v10", "m s-1", null)), reused);
+        assertNotSame(reused.ekmanPumping().values(), other.ekmanPumping().values());
+        assertTrue(Double.isNaN(other.ekmanPumping().values()[g.index(10, 10)]), "the new mask is honoured");
+    }
+
+    @Test
+    void cutoffCountFollowsTheMaskOfEachGrid() {
+        VectorField wind = wind();
+        LonLatGrid g = wind.grid();
+        boolean[] mask = g.oceanMask();
+        for (int i = 0; i < 7; i++) mask[g.index(i, 9)] = false; // row 9 is at −1°, inside the cut-off
+        LonLatGrid g2 = g.withOcean(mask);
+        SurfaceResponse response = new SurfaceResponse(LAW, C, EquatorialCutoff.DEFAULT);
+        assertEquals(4 * 30, response.fromWind(wind).cutoffCells());
+        VectorField w2 = new VectorField(new ScalarField(g2, wind.eastward().values(), "u10", "m s-1", null),
+                new ScalarField(g2, wind.northward().values(), "v10", "m s-1", null));
+        double[] ue = new double[g2.size()], ve = new double[g2.size()];
+        double[] tx = new double[g2.size()], ty = new double[g2.size()];
+        WindStress.compute(g2, w2.eastward().values(), w2.northward().values(), LAW, C.rhoAir(), tx, ty);
+        int expected = EkmanTransport.compute(g2, tx, ty, C, EquatorialCutoff.DEFAULT, ue, ve);
+        assertEquals(4 * 30 - 7, expected);
+        assertEquals(expected, response.fromWind(w2).cutoffCells());
+    }
 }

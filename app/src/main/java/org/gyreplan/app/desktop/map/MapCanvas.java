@@ -256,7 +256,9 @@ public class MapCanvas extends Region {
 
     private void scrolled(ScrollEvent e) {
         if (e.getDeltaY() == 0) return;
-        view.zoomAbout(Math.pow(1.0025, e.getDeltaY()), e.getX(), e.getY());
+        // one wheel notch (deltaY = multiplierY, typically 40 px) zooms by 20 %; trackpads give fractions of a notch
+        double notches = e.getDeltaY() / (e.getMultiplierY() > 0 ? e.getMultiplierY() : 40);
+        view.zoomAbout(Math.pow(1.2, notches), e.getX(), e.getY());
         requestRedraw();
         e.consume();
     }

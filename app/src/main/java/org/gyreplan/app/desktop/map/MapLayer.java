@@ -50,7 +50,8 @@ public abstract class MapLayer {
         public String text() {
             if (note != null) return note;
             if (Double.isNaN(value)) return "—";
-            return Format.number(value) + (units == null || units.isEmpty() ? "" : " " + units);
+            boolean none = units == null || units.isEmpty() || units.equals("1");   // "1": dimensionless (UDUNITS)
+            return Format.number(value) + (none ? "" : " " + units);
         }
     }
 }

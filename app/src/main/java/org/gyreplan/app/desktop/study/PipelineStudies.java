@@ -25,7 +25,6 @@ import org.gyreplan.solver.series.TimeSeries;
 import org.gyreplan.solver.series.UpwellingSeason;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
-import org.locationtech.jts.geom.GeometryFactory;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -45,7 +44,6 @@ import java.util.Map;
  * ({@link #fromResult}). Only re-arranges what the scenario and the pipeline hold; computes no physics.
  */
 public final class PipelineStudies {
-    private static final GeometryFactory GF = new GeometryFactory();
     /** Field names shown first (the first match is the visible layer when the study opens). */
     private static final List<String> PREFERRED = List.of("streamfunction", "pumping", "curl", "persistence", "upwelling",
             "stress", "transport", "wind");
@@ -182,10 +180,12 @@ public final class PipelineStudies {
             }
         }
         if (route != null) {
+            // the route's own stops are what the schedule knows: they replace the sited points when it has moorings
+            if (route.order().stream().anyMatch(st -> st.kind() != StopKind.CTD_STATION)) m.moorings.clear();
             for (Stop st : route.order()) {
                 MapPoint p = new MapPoint(st.id(), st.id(), st.lonDeg(), st.latDeg(), Double.NaN);
                 if (st.kind() == StopKind.CTD_STATION) m.stations.add(p);
-                else if (m.moorings.stream().noneMatch(q -> q.id().equals(st.id()))) m.moorings.add(p);
+                else m.moorings.add(p);
             }
             m.port = new MapPoint("port", route.port().id(), route.port().lonDeg(), route.port().latDeg(), Double.NaN);
             if (schedule != null) m.cruise = new CruisePlan(route, schedule, Obstacles.of(m.exclusions, 2, 5), depth);
@@ -327,5 +327,4 @@ public final class PipelineStudies {
         return out;
     }
 
-    static Geometry point(double lon, double lat) { return GF.createPoint(new Coordinate(lon, lat)); }
 }

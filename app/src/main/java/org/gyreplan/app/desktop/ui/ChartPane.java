@@ -71,6 +71,7 @@ public class ChartPane extends VBox {
         for (int k = 0; k < s.times().size(); k++) {
             if (Double.isFinite(s.values()[k])) v.getData().add(new XYChart.Data<>(year(s.times().get(k)), s.values()[k]));
         }
+        hideSymbolsIfDense(v);
         series.getData().add(v);
         marker.getData().clear();
         series.getData().add(marker);
@@ -86,12 +87,20 @@ public class ChartPane extends VBox {
             climatology.getData().add(c);
         }
         if (s.cumulative().length > 0) {
-            XYChart.Series<Number, Number> c = new XYChart.Series<>();
-            c.setName("Cumulative index");
+            // one curve per calendar year (the index restarts each year)
+            XYChart.Series<Number, Number> c = null;
+            int curYear = Integer.MIN_VALUE;
             for (int k = 0; k < s.cumulativeTimes().size(); k++) {
+                int y = s.cumulativeTimes().get(k).atZone(ZoneOffset.UTC).getYear();
+                if (c == null || y != curYear) {
+                    if (c != null) { hideSymbolsIfDense(c); cumulative.getData().add(c); }
+                    c = new XYChart.Series<>();
+                    c.setName(String.valueOf(y));
+                    curYear = y;
+                }
                 if (Double.isFinite(s.cumulative()[k])) c.getData().add(new XYChart.Data<>(year(s.cumulativeTimes().get(k)), s.cumulative()[k]));
             }
-            cumulative.getData().add(c);
+            if (c != null) { hideSymbolsIfDense(c); cumulative.getData().add(c); }
             cumulative.getData().add(dates("Season start", s.seasonStarts(), s));
             cumulative.getData().add(dates("Season end", s.seasonEnds(), s));
             fitYearAxis(cumulative, s.cumulativeTimes());
@@ -124,6 +133,12 @@ public class ChartPane extends VBox {
     /** Decimal year of the "this step" marker, or NaN. */
     public double markerYear() {
         return marker.getData().isEmpty() ? Double.NaN : marker.getData().get(0).getXValue().doubleValue();
+    }
+
+    /** Long series are drawn as lines only: every point gets an empty node instead of a symbol. */
+    private static void hideSymbolsIfDense(XYChart.Series<Number, Number> s) {
+        if (s.getData().size() <= 60) return;
+        for (XYChart.Data<Number, Number> d : s.getData()) d.setNode(new javafx.scene.Group());
     }
 
     private static XYChart.Series<Number, Number> dates(String name, List<Instant> when, PointSeries s) {

@@ -49,14 +49,16 @@ public class PlanPanel extends VBox {
         caution.getStyleClass().add("caution");
         table.setId("scheduleTable");
         table.getColumns().add(col("#", "step", 30));
-        table.getColumns().add(col("Leg", "leg", 110));
-        table.getColumns().add(col("nmi", "distance", 50));
-        table.getColumns().add(col("Under way h", "transit", 60));
-        table.getColumns().add(col("Work h", "station", 50));
+        table.getColumns().add(col("Leg", "leg", 130));
+        table.getColumns().add(col("nmi", "distance", 48));
+        table.getColumns().add(col("Sail h", "transit", 48));
+        table.getColumns().add(col("Work h", "station", 52));
         table.getColumns().add(col("Arrives (UTC)", "arrival", 115));
         table.setPlaceholder(new Label("No cruise plan in this study"));
         VBox.setVgrow(table, Priority.ALWAYS);
         totals.setId("scheduleTotals");
+        totals.setWrapText(true);
+        totals.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
         getChildren().addAll(caution, totals, table);
     }
 
