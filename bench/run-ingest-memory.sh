@@ -11,5 +11,5 @@ mvn -B -q -ntp -pl bench -am package -DskipTests
 CP="bench/target/classes:$(ls bench/target/lib/*.jar | tr '\n' ':')"
 java -Xmx512m -cp "$CP" org.gyreplan.bench.ingest.WindFileGenerator "$FILE" 0.25 "$STEPS" 6
 ls -l "$FILE"
-/usr/bin/time -v java -Xmx512m -cp "$CP" org.gyreplan.bench.ingest.IngestBenchmark "$FILE" 1 pipeline 2>&1 \
+/usr/bin/time -v java -Xmx512m -cp "$CP" org.gyreplan.bench.ingest.IngestBenchmark "$FILE" 1 reuse 2>&1 \
   | grep -E "java|Maximum resident|Elapsed|Exit status" | grep -v SLF4J
