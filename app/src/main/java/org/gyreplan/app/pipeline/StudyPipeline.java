@@ -230,12 +230,15 @@ public final class StudyPipeline {
             Instant[] times = new Instant[nt];
             int portCell = s.survey != null && s.survey.port != null ? nearestOcean(g, s.survey.port.lonDeg, s.survey.port.latDeg) : -1;
             double[] portWind = portCell >= 0 ? new double[nt] : null;
+            // the accumulators, statistics and index sampling consume each step at once, so one set of response
+            // arrays is reused across the time loop (memory O(grid), no per-step allocation of six fields)
+            SurfaceResponse.Step r = null;
             for (int k = 0; k < nt; k++) {
                 st.cancel.check();
                 times[k] = series.time(k);
                 VectorField wind = series.wind(k, g);
                 if (portWind != null) portWind[k] = wind.magnitude(portCell);
-                SurfaceResponse.Step r = response.fromWind(wind);
+                r = response.fromWind(wind, r);
                 acc.add(wind, r);
                 stats.add(times[k], r.ekmanPumping());
                 List<PointIndex> at = index.atPoints(r.stress(), st.coastPoints);
