@@ -3,7 +3,6 @@ package org.gyreplan.app.pipeline;
 import org.gyreplan.app.scenario.Headline;
 import org.gyreplan.app.scenario.Scenario;
 import org.gyreplan.app.scenario.ScenarioFiles;
-import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
@@ -18,10 +17,10 @@ import static org.junit.jupiter.api.Assertions.*;
 /**
  * Every scenario in {@code scenarios/} runs end to end and meets its own {@code expected} block. The expected
  * values and their sources (numpy reference computations in make_scenario_data.py, published bounds, the design
- * of the synthetic winds) are written beside each entry in the scenario file. Slow: each run streams 1–2 years of
- * daily winds and solves the gyre (tens of seconds on a loaded machine).
+ * of the synthetic winds) are written beside each entry in the scenario file. Each run streams 1–2 years of daily
+ * winds and solves the gyre (about 15 s for all three); it runs in the default suite because the scenarios are the
+ * product's end-to-end regression cases.
  */
-@Tag("slow")
 class ScenariosTest {
 
     @ParameterizedTest
