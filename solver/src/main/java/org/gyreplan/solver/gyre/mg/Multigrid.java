@@ -86,6 +86,13 @@ public final class Multigrid {
         cycle(0, v, z);
     }
 
+    /**
+     * One cycle on level l for A_l x = b, improving x in place. The coarse problem is set up once from the residual
+     * after pre-smoothing; it is then treated by {@code cycleIndex} coarse cycles (1 = V, 2 = W), the later ones
+     * starting from the earlier coarse iterate, before the single prolongation and post-smoothing (the textbook
+     * γ-cycle, Trottenberg et al. 2001 §2.4). With a Galerkin coarse operator this equals repeating the fine-level
+     * coarse-grid correction, at the cost of one fine residual, restriction and prolongation instead of γ.
+     */
     private void cycle(int l, double[] b, double[] x) {
         Level lev = levels.get(l);
         if (l == levels.size() - 1) {
@@ -94,13 +101,12 @@ public final class Multigrid {
         }
         for (int s = 0; s < preSweeps; s++) lev.smoother.sweep(b, x, false, par);
         Level co = levels.get(l + 1);
-        for (int g = 0; g < (l + 1 == levels.size() - 1 ? 1 : cycleIndex); g++) {
-            lev.A.residual(b, x, lev.r, par);
-            restrict(lev.A, co.A, lev.r, co.b, par);
-            java.util.Arrays.fill(co.x, 0.0);
-            cycle(l + 1, co.b, co.x);
-            prolongAdd(lev.A, co.A, co.x, x, par);
-        }
+        lev.A.residual(b, x, lev.r, par);
+        restrict(lev.A, co.A, lev.r, co.b, par);
+        java.util.Arrays.fill(co.x, 0.0);
+        int gamma = l + 1 == levels.size() - 1 ? 1 : cycleIndex;   // the direct solve needs no repetition
+        for (int g = 0; g < gamma; g++) cycle(l + 1, co.b, co.x);
+        prolongAdd(lev.A, co.A, co.x, x, par);
         for (int s = 0; s < postSweeps; s++) lev.smoother.sweep(b, x, true, par);
     }
 
