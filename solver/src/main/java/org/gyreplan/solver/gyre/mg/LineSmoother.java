@@ -153,11 +153,7 @@ final class LineSmoother {
         boolean[] act = A.active;
         // right-hand side: b minus the couplings to other rows (in-row values of x are not needed)
         for (int k = k0; k < k1; k++) x[k] = act[k] ? b[k] : 0.0;
-        for (int s : offRowSlots) {
-            double[] cs = A.a[s];
-            int off = A.offset[s];
-            for (int k = k0 + R; k < k1 - R; k++) x[k] -= cs[k] * x[k + off];
-        }
+        StencilMatrix.subtractSlots(A.a, A.offset, offRowSlots, x, x, k0 + R, k1 - R);
         if (R == 1) {
             for (int k = k0 + 1; k < k1; k++) x[k] -= l1[k] * x[k - 1];
             x[k1 - 1] *= dinv[k1 - 1];

@@ -88,18 +88,56 @@ public final class StencilMatrix {
 
     int chunks() { return (ny + ROWS_PER_CHUNK - 1) / ROWS_PER_CHUNK; }
 
+    /** Stored (non-null) stencil slots in slot order. */
+    int[] storedSlots() {
+        int cnt = 0;
+        for (double[] c : a) if (c != null) cnt++;
+        int[] out = new int[cnt];
+        cnt = 0;
+        for (int s = 0; s < a.length; s++) if (a[s] != null) out[cnt++] = s;
+        return out;
+    }
+
+    /**
+     * r[k] := r[k] − Σ_q c_q[k] x[k + o_q] over the given slots for k0 ≤ k &lt; k1, subtracting the terms one by one in
+     * slot order (the same rounding as one pass per slot), four slots per pass over r to save memory traffic.
+     */
+    static void subtractSlots(double[][] a, int[] offset, int[] slots, double[] x, double[] r, int k0, int k1) {
+        int q = 0, ns = slots.length;
+        for (; q + 3 < ns; q += 4) {
+            double[] c0 = a[slots[q]], c1 = a[slots[q + 1]], c2 = a[slots[q + 2]], c3 = a[slots[q + 3]];
+            int o0 = offset[slots[q]], o1 = offset[slots[q + 1]], o2 = offset[slots[q + 2]], o3 = offset[slots[q + 3]];
+            for (int k = k0; k < k1; k++) {
+                r[k] = r[k] - c0[k] * x[k + o0] - c1[k] * x[k + o1] - c2[k] * x[k + o2] - c3[k] * x[k + o3];
+            }
+        }
+        for (; q < ns; q++) {
+            double[] cs = a[slots[q]];
+            int off = offset[slots[q]];
+            for (int k = k0; k < k1; k++) r[k] -= cs[k] * x[k + off];
+        }
+    }
+
     /** y = A x (y is zero on inactive nodes provided the matrix has zero rows there). */
     public void apply(double[] x, double[] y, Parallel par) {
+        int[] slots = storedSlots();
         par.forEach(chunks(), c -> {
             int j0 = c * ROWS_PER_CHUNK, j1 = Math.min(ny, j0 + ROWS_PER_CHUNK);
             for (int j = j0; j < j1; j++) {
                 int k0 = j * nx, k1 = k0 + nx;
                 java.util.Arrays.fill(y, k0, k1, 0.0);
                 if (j < radius || j >= ny - radius) continue;
-                for (int s = 0; s < a.length; s++) {
-                    double[] cs = a[s];
-                    if (cs == null) continue;
-                    int off = offset[s];
+                int q = 0, ns = slots.length;
+                for (; q + 3 < ns; q += 4) {
+                    double[] c0 = a[slots[q]], c1 = a[slots[q + 1]], c2 = a[slots[q + 2]], c3 = a[slots[q + 3]];
+                    int o0 = offset[slots[q]], o1 = offset[slots[q + 1]], o2 = offset[slots[q + 2]], o3 = offset[slots[q + 3]];
+                    for (int k = k0 + radius; k < k1 - radius; k++) {
+                        y[k] = y[k] + c0[k] * x[k + o0] + c1[k] * x[k + o1] + c2[k] * x[k + o2] + c3[k] * x[k + o3];
+                    }
+                }
+                for (; q < ns; q++) {
+                    double[] cs = a[slots[q]];
+                    int off = offset[slots[q]];
                     for (int k = k0 + radius; k < k1 - radius; k++) y[k] += cs[k] * x[k + off];
                 }
             }
@@ -108,18 +146,14 @@ public final class StencilMatrix {
 
     /** r = b − A x. */
     public void residual(double[] b, double[] x, double[] r, Parallel par) {
+        int[] slots = storedSlots();
         par.forEach(chunks(), c -> {
             int j0 = c * ROWS_PER_CHUNK, j1 = Math.min(ny, j0 + ROWS_PER_CHUNK);
             for (int j = j0; j < j1; j++) {
                 int k0 = j * nx, k1 = k0 + nx;
                 for (int k = k0; k < k1; k++) r[k] = active[k] ? b[k] : 0.0;
                 if (j < radius || j >= ny - radius) continue;
-                for (int s = 0; s < a.length; s++) {
-                    double[] cs = a[s];
-                    if (cs == null) continue;
-                    int off = offset[s];
-                    for (int k = k0 + radius; k < k1 - radius; k++) r[k] -= cs[k] * x[k + off];
-                }
+                subtractSlots(a, offset, slots, x, r, k0 + radius, k1 - radius);
             }
         });
     }
