@@ -101,10 +101,12 @@ final class LineSmoother {
             par.forEach(nChunks, ch -> {
                 int r0 = ch * rowsPerChunk, r1 = Math.min(rowsOfColour, r0 + rowsPerChunk);
                 int r = r0;
+                // two independent rows at a time: their band solves interleave (instruction-level parallelism);
+                // each row's arithmetic is unchanged, so results do not depend on the pairing
                 if (R == 1) {
-                    // two independent rows at a time: their band solves interleave (instruction-level parallelism);
-                    // each row's arithmetic is unchanged, so results do not depend on the pairing
                     for (; r + 1 < r1; r += 2) relaxRowPair(col + r * colours, col + (r + 1) * colours, b, x);
+                } else {
+                    for (; r + 1 < r1; r += 2) relaxRowPair2(col + r * colours, col + (r + 1) * colours, b, x);
                 }
                 for (; r < r1; r++) relaxRow(col + r * colours, b, x);
             });
@@ -143,6 +145,38 @@ final class LineSmoother {
         for (int k = ka - 1; k >= a0; k--) {
             x[k] = (x[k] - u1[k] * x[k + 1]) * dinv[k];
             x[k + d] = (x[k + d] - u1[k + d] * x[k + d + 1]) * dinv[k + d];
+        }
+    }
+
+    /** Two rows of radius 2 relaxed together (identical arithmetic to two {@link #relaxRow} calls). */
+    private void relaxRowPair2(int ja, int jb, double[] b, double[] x) {
+        if (!rowActive[ja] || !rowActive[jb]) {
+            relaxRow(ja, b, x);
+            relaxRow(jb, b, x);
+            return;
+        }
+        int nx = A.nx;
+        int k0 = ja * nx, k1 = k0 + nx, d = (jb - ja) * nx;
+        boolean[] act = A.active;
+        for (int k = k0; k < k1; k++) {
+            x[k] = act[k] ? b[k] : 0.0;
+            x[k + d] = act[k + d] ? b[k + d] : 0.0;
+        }
+        StencilMatrix.subtractSlots(A.a, A.offset, offRowSlots, x, x, k0 + R, k1 - R);
+        StencilMatrix.subtractSlots(A.a, A.offset, offRowSlots, x, x, k0 + d + R, k1 + d - R);
+        x[k0 + 1] -= l1[k0 + 1] * x[k0];
+        x[k0 + d + 1] -= l1[k0 + d + 1] * x[k0 + d];
+        for (int k = k0 + 2; k < k1; k++) {
+            x[k] -= l1[k] * x[k - 1] + l2[k] * x[k - 2];
+            x[k + d] -= l1[k + d] * x[k + d - 1] + l2[k + d] * x[k + d - 2];
+        }
+        x[k1 - 1] *= dinv[k1 - 1];
+        x[k1 + d - 1] *= dinv[k1 + d - 1];
+        x[k1 - 2] = (x[k1 - 2] - u1[k1 - 2] * x[k1 - 1]) * dinv[k1 - 2];
+        x[k1 + d - 2] = (x[k1 + d - 2] - u1[k1 + d - 2] * x[k1 + d - 1]) * dinv[k1 + d - 2];
+        for (int k = k1 - 3; k >= k0; k--) {
+            x[k] = (x[k] - u1[k] * x[k + 1] - u2[k] * x[k + 2]) * dinv[k];
+            x[k + d] = (x[k + d] - u1[k + d] * x[k + d + 1] - u2[k + d] * x[k + d + 2]) * dinv[k + d];
         }
     }
 
