@@ -307,14 +307,18 @@ public final class GeoPackageFiles {
         return out;
     }
 
+    private static void requireLayer(Map<String, String> layers, Path file, String layer) throws GeometryFileException {
+        if (!layers.containsKey(layer)) {
+            throw new GeometryFileException(Problem.NO_POLYGONS, file, -1, null, null, "no layer \"" + layer
+                    + "\"; layers are " + layers.keySet());
+        }
+    }
+
     /** Reads one layer (any geometry type) with its attributes; the fid is not a property. */
     public static FeatureLayer readLayer(Path file, String layer) throws IOException {
         try (Connection c = openReadOnly(file)) {
             Map<String, String> ls = layers(c, file);
-            if (!ls.containsKey(layer)) {
-                throw new GeometryFileException(Problem.NO_POLYGONS, file, -1, null, null, "no layer \"" + layer
-                        + "\"; layers are " + ls.keySet());
-            }
+            requireLayer(ls, file, layer);
             checkSrs(c, file, layer);
             List<Feature> out = new ArrayList<>();
             Rows rows = rows(c, layer);
@@ -352,9 +356,8 @@ public final class GeoPackageFiles {
                             : "several polygon layers " + polyLayers + "; name the one to use");
                 }
                 layer = polyLayers.get(0);
-            } else if (!ls.containsKey(layer)) {
-                throw new GeometryFileException(Problem.NO_POLYGONS, file, -1, null, null, "no layer \"" + layer
-                        + "\"; layers are " + ls.keySet());
+            } else {
+                requireLayer(ls, file, layer);
             }
             checkSrs(c, file, layer);
             List<PolygonFeature> out = new ArrayList<>();

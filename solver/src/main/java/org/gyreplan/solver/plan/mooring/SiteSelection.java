@@ -127,13 +127,7 @@ public final class SiteSelection {
                         t.remove(Integer.valueOf(out));
                         BitSet blocked = (BitSet) base.clone();
                         if (in0 >= 0) { t.add(in0); blocked.or(conflicts[in0]); blocked.set(in0); }
-                        for (int j : sortedOrder) {
-                            if (t.size() >= k) break;
-                            if (blocked.get(j)) continue;
-                            t.add(j);
-                            blocked.or(conflicts[j]);
-                            blocked.set(j);
-                        }
+                        refillGreedily(t, blocked);
                         double tt = 0;
                         for (int i : t) tt += score[i];
                         if (t.size() > bestC || (t.size() == bestC && tt > bestT + EPS)) { bestC = t.size(); bestT = tt; bestSet = t; }
@@ -178,6 +172,17 @@ public final class SiteSelection {
     }
 
     /** Best improving "remove two, insert one of the best free, refill greedily" move, or null. */
+    /** Adds candidates by decreasing score while the set has fewer than K and a candidate is free of conflicts. */
+    private void refillGreedily(List<Integer> t, BitSet blocked) {
+        for (int j : sortedOrder) {
+            if (t.size() >= k) break;
+            if (blocked.get(j)) continue;
+            t.add(j);
+            blocked.or(conflicts[j]);
+            blocked.set(j);
+        }
+    }
+
     private List<Integer> shiftTwo(List<Integer> s) {
         double curTotal = 0;
         for (int i : s) curTotal += score[i];
@@ -203,13 +208,7 @@ public final class SiteSelection {
                     BitSet blocked = (BitSet) base.clone();
                     blocked.or(conflicts[in0]);
                     blocked.set(in0);
-                    for (int j : sortedOrder) {
-                        if (t.size() >= k) break;
-                        if (blocked.get(j)) continue;
-                        t.add(j);
-                        blocked.or(conflicts[j]);
-                        blocked.set(j);
-                    }
+                    refillGreedily(t, blocked);
                     double tt = 0;
                     for (int i : t) tt += score[i];
                     if (t.size() > bestC || (t.size() == bestC && tt > bestT + EPS)) { bestC = t.size(); bestT = tt; bestSet = t; }
